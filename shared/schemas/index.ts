@@ -1,0 +1,6 @@
+export * from './common';
+export * from './auth';
+export * from './workshop';
+export * from './vehicle';
+export * from './survey';
+export * from './finding';
