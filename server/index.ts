@@ -1,0 +1,54 @@
+import type { Server } from 'node:http';
+import type { Sequelize } from 'sequelize';
+import { createApp } from './app';
+import { loadConfig, type Config } from './config';
+import { createSequelize } from './db';
+import { createMailer } from './mail/transport';
+import { createStorage } from './storage';
+
+/**
+ * Starts the API + web server on config.host:config.port (0 = any free port).
+ * The caller owns the database and migrations; `close()` stops listening and releases resources.
+ */
+export async function startServer(config: Config, opts: { sequelize?: Sequelize } = {}) {
+  const sequelize = opts.sequelize ?? createSequelize(config);
+  await sequelize.authenticate();
+  const storage = createStorage(config.storage);
+  const mailer = createMailer({ host: config.mail.host, port: config.mail.port, from: config.mail.from });
+  const app = createApp({ config, storage, mailer });
+  const server: Server = await new Promise((resolve, reject) => {
+    const s = app.listen(config.port, config.host, () => resolve(s));
+    s.once('error', reject);
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : config.port;
+  const url = `http://${config.host}:${port}`;
+  return {
+    port,
+    url,
+    app,
+    async close() {
+      const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+      server.closeAllConnections();
+      await closed;
+      mailer.close();
+      if (!opts.sequelize) await sequelize.close();
+    },
+  };
+}
+
+/** `tsx server/index.ts`: run against an already prepared database (npm start does the preparing). */
+if (require.main === module) {
+  const config = loadConfig();
+  startServer(config)
+    .then((s) => {
+      console.log(`Soundframe API listening on ${s.url}`);
+      const stop = () => s.close().then(() => process.exit(0));
+      process.once('SIGINT', stop);
+      process.once('SIGTERM', stop);
+    })
+    .catch((e) => {
+      console.error(e);
+      process.exit(1);
+    });
+}

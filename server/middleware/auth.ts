@@ -1,0 +1,100 @@
+import crypto from 'node:crypto';
+import type { NextFunction, Request, Response } from 'express';
+import jwt from 'jsonwebtoken';
+import { ERROR_CODES } from '@/shared/schemas/common';
+import type { Config } from '../config';
+import { AppError, unauthenticated } from '../errors';
+
+export const SESSION_COOKIE = 'sf_session';
+export const CSRF_COOKIE = 'sf_csrf';
+export const CSRF_HEADER = 'x-csrf-token';
+const ALGORITHM = 'HS256' as const; // pinned: tokens with any other alg are refused
+
+export type AuthContext = { userId: string; via: 'cookie' | 'bearer' };
+
+export function signSessionToken(config: Config, userId: string): string {
+  return jwt.sign({}, config.jwt.secret, {
+    algorithm: ALGORITHM,
+    subject: userId,
+    issuer: config.jwt.issuer,
+    audience: config.jwt.audience,
+    expiresIn: config.jwt.ttlMinutes * 60,
+    jwtid: crypto.randomUUID(),
+  });
+}
+
+function verify(config: Config, token: string): string | null {
+  try {
+    const payload = jwt.verify(token, config.jwt.secret, {
+      algorithms: [ALGORITHM],
+      issuer: config.jwt.issuer,
+      audience: config.jwt.audience,
+    });
+    return typeof payload === 'object' && typeof payload.sub === 'string' ? payload.sub : null;
+  } catch {
+    return null;
+  }
+}
+
+/** Sets the session and CSRF cookies for the web client; returns the CSRF value. */
+export function setSessionCookies(res: Response, config: Config, token: string): string {
+  const csrf = crypto.randomBytes(24).toString('base64url');
+  const common = { sameSite: 'lax' as const, secure: config.production, path: '/', maxAge: config.jwt.ttlMinutes * 60_000 };
+  res.cookie(SESSION_COOKIE, token, { ...common, httpOnly: true });
+  res.cookie(CSRF_COOKIE, csrf, { ...common, httpOnly: false });
+  return csrf;
+}
+
+export function clearSessionCookies(res: Response, config: Config) {
+  const common = { sameSite: 'lax' as const, secure: config.production, path: '/' };
+  res.clearCookie(SESSION_COOKIE, { ...common, httpOnly: true });
+  res.clearCookie(CSRF_COOKIE, common);
+}
+
+/**
+ * Reads a Bearer token or the session cookie into `res.locals.auth`. Unsafe requests that
+ * authenticate by cookie must echo the CSRF cookie in the `x-csrf-token` header (double submit).
+ */
+export function authenticate(config: Config) {
+  return (req: Request, res: Response, next: NextFunction) => {
+    const header = req.get('authorization');
+    if (header?.startsWith('Bearer ')) {
+      const userId = verify(config, header.slice(7).trim());
+      if (!userId) return next(unauthenticated('Your session is not valid. Sign in again.'));
+      res.locals.auth = { userId, via: 'bearer' } satisfies AuthContext;
+      return next();
+    }
+    const cookie = req.cookies?.[SESSION_COOKIE] as string | undefined;
+    if (!cookie) return next();
+    const userId = verify(config, cookie);
+    if (!userId) {
+      clearSessionCookies(res, config);
+      return next();
+    }
+    if (!['GET', 'HEAD', 'OPTIONS'].includes(req.method)) {
+      const sent = req.get(CSRF_HEADER) ?? '';
+      const expected = (req.cookies?.[CSRF_COOKIE] as string | undefined) ?? '';
+      if (!expected || !safeEqual(sent, expected))
+        return next(new AppError(403, ERROR_CODES.csrf, 'The form expired. Reload the page and try again.'));
+    }
+    res.locals.auth = { userId, via: 'cookie' } satisfies AuthContext;
+    next();
+  };
+}
+
+function safeEqual(a: string, b: string) {
+  const x = Buffer.from(a);
+  const y = Buffer.from(b);
+  return x.length === y.length && crypto.timingSafeEqual(x, y);
+}
+
+export function requireAuth(_req: Request, res: Response, next: NextFunction) {
+  if (!res.locals.auth) return next(unauthenticated());
+  next();
+}
+
+export function authOf(res: Response): AuthContext {
+  const auth = res.locals.auth as AuthContext | undefined;
+  if (!auth) throw unauthenticated();
+  return auth;
+}

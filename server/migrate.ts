@@ -1,0 +1,17 @@
+import type { Sequelize } from 'sequelize';
+import { SequelizeStorage, Umzug } from 'umzug';
+import { MIGRATIONS } from './migrations';
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: MIGRATIONS.map((m) => ({ name: m.name, up: m.up, down: m.down })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+/** Apply pending migrations (schema changes never go through `sync()`). */
+export async function runMigrations(sequelize: Sequelize): Promise<void> {
+  await createMigrator(sequelize).up();
+}

@@ -1,0 +1,56 @@
+import type { Sequelize } from 'sequelize';
+import { AuditEntry } from './audit-entry';
+import { Finding } from './finding';
+import { Invitation } from './invitation';
+import { Membership } from './membership';
+import { Photo } from './photo';
+import { Survey } from './survey';
+import { User } from './user';
+import { Vehicle } from './vehicle';
+import { VehicleAccess } from './vehicle-access';
+import { Workshop } from './workshop';
+
+export { AuditEntry, Finding, Invitation, Membership, Photo, Survey, User, Vehicle, VehicleAccess, Workshop };
+
+/** Define every model, then every association in one step (associations need all models). */
+export function initModels(sequelize: Sequelize) {
+  for (const m of [Workshop, User, Membership, Invitation, Vehicle, VehicleAccess, Survey, Finding, Photo, AuditEntry])
+    m.initModel(sequelize);
+
+  Workshop.hasMany(Membership, { foreignKey: 'workshopId', as: 'memberships' });
+  Membership.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+  Invitation.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
+
+  Workshop.hasMany(Vehicle, { foreignKey: 'workshopId', as: 'vehicles' });
+  Vehicle.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  Vehicle.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+
+  Vehicle.hasMany(VehicleAccess, { foreignKey: 'vehicleId', as: 'access' });
+  VehicleAccess.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  VehicleAccess.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  VehicleAccess.belongsTo(User, { foreignKey: 'grantedById', as: 'grantedBy' });
+  VehicleAccess.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+
+  Vehicle.hasMany(Survey, { foreignKey: 'vehicleId', as: 'surveys' });
+  Survey.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  Survey.belongsTo(User, { foreignKey: 'inspectorId', as: 'inspector' });
+  Survey.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+
+  Survey.hasMany(Finding, { foreignKey: 'surveyId', as: 'findings' });
+  Finding.belongsTo(Survey, { foreignKey: 'surveyId', as: 'survey' });
+  Finding.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  Finding.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Finding.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+
+  Finding.hasMany(Photo, { foreignKey: 'findingId', as: 'photos' });
+  Photo.belongsTo(Finding, { foreignKey: 'findingId', as: 'finding' });
+  Photo.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+  Photo.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+
+  AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  AuditEntry.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+}
