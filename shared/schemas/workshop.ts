@@ -5,11 +5,18 @@ import { isoDateTime, uuid } from './common';
 
 export const UNITS = ['metric', 'imperial'] as const;
 
+const settingsFields = {
+  units: z.enum(UNITS),
+  region: z.string().trim().max(120),
+  labourRatePerHour: z.number().min(0).max(100000),
+  currency: z.string().trim().min(1).max(8),
+};
+
 export const workshopSettings = z.object({
-  units: z.enum(UNITS).default('metric'),
-  region: z.string().trim().max(120).default(''),
-  labourRatePerHour: z.number().min(0).max(100000).default(0),
-  currency: z.string().trim().min(1).max(8).default('EUR'),
+  units: settingsFields.units.default('metric'),
+  region: settingsFields.region.default(''),
+  labourRatePerHour: settingsFields.labourRatePerHour.default(0),
+  currency: settingsFields.currency.default('EUR'),
 });
 export type WorkshopSettings = z.infer<typeof workshopSettings>;
 
@@ -23,7 +30,8 @@ export type WorkshopResponse = z.infer<typeof workshopResponse>;
 
 export const updateWorkshopRequest = z.object({
   name: z.string().trim().min(2).max(120).optional(),
-  settings: workshopSettings.partial().optional(),
+  // No defaults here: a key left out keeps its saved value (defaults would overwrite it).
+  settings: z.object(settingsFields).partial().optional(),
 });
 
 export const memberResponse = z.object({
@@ -65,6 +73,13 @@ export const auditEntryResponse = z.object({
   summary: z.string(),
 });
 export type AuditEntryResponse = z.infer<typeof auditEntryResponse>;
+
+/** GET /api/workshops/:wid/audit — newest first, a page at a time. */
+export const auditListQuery = z.object({
+  limit: z.coerce.number().int().min(1).max(200).default(50),
+  offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+});
+export type AuditListQuery = z.infer<typeof auditListQuery>;
 
 export const outboxMessage = z.object({
   id: z.string(),
