@@ -141,7 +141,8 @@ export const bodyPlanSchema = z
     for (const v of plan.views) {
       if (viewKeys.has(v.key)) ctx.addIssue({ code: 'custom', message: `duplicate view ${v.key}` });
       viewKeys.add(v.key);
-      const inside = ([x, y]: [number, number]) => x >= 0 && y >= 0 && x <= v.width && y <= v.height;
+      const inside = ([x, y]: [number, number]) =>
+        x >= 0 && y >= 0 && x <= v.width && y <= v.height;
       for (const s of v.shapes) {
         if (!keys.has(s.zone))
           ctx.addIssue({ code: 'custom', message: `view ${v.key} draws unknown zone ${s.zone}` });
@@ -154,6 +155,7 @@ export const bodyPlanSchema = z
           ctx.addIssue({ code: 'custom', message: `an outline leaves the ${v.key} view box` });
     }
     for (const k of keys)
-      if (!drawn.has(k)) ctx.addIssue({ code: 'custom', message: `zone ${k} is not drawn in any view` });
+      if (!drawn.has(k))
+        ctx.addIssue({ code: 'custom', message: `zone ${k} is not drawn in any view` });
   });
 export type BodyPlan = z.infer<typeof bodyPlanSchema>;
