@@ -1,0 +1,123 @@
+/**
+ * `npm test [jest args]`: installs what the tests need, starts a throw-away MariaDB (never the
+ * demo's), builds the web export when stale, runs every jest project, and always shuts the
+ * database down, so a run leaves no process behind.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
+import { ensureAptPackages } from './apt';
+import {
+  ensureDatabase,
+  findMariadbBinaries,
+  startPrivateMariadb,
+  stopStrayInstances,
+  type PrivateMariadb,
+} from './mariadb';
+import { summaryLine, type JestSummary } from './jest-summary';
+import { failAndExit, freePort, generateSecret, REPO_ROOT, ToolError } from './shell';
+import { ensureWebExport } from './web-export';
+
+const TEST_DATABASE = 'soundframe_test';
+/** Test files create their own databases named soundframe_t_<name>_<random> (see __tests__/e2e/support). */
+const TEST_DATABASE_PATTERN = 'soundframe\\_t%';
+
+let interrupted: NodeJS.Signals | null = null;
+let jest: ChildProcess | null = null;
+
+function checkInterrupted(): void {
+  if (interrupted) throw new ToolError(`Interrupted (${interrupted}).`);
+}
+
+function runJest(args: string[], env: NodeJS.ProcessEnv): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(
+      process.execPath,
+      [
+        path.join(REPO_ROOT, 'node_modules', 'jest', 'bin', 'jest.js'),
+        '--ci',
+        '--maxWorkers=2',
+        ...args,
+      ],
+      { cwd: REPO_ROOT, env, stdio: 'inherit' },
+    );
+    jest = child;
+    child.on('error', reject);
+    child.on('exit', (code, signal) => {
+      jest = null;
+      resolve(code ?? (signal ? 1 : 0));
+    });
+  });
+}
+
+async function main(): Promise<number> {
+  const args = process.argv.slice(2);
+  await ensureAptPackages(['mariadb-server', 'chromium', 'poppler-utils']);
+  if (!findMariadbBinaries())
+    throw new ToolError('mariadb-server is installed but its programs are missing.');
+  checkInterrupted();
+
+  const dataDir = path.join(REPO_ROOT, '.data', 'test-mariadb');
+  const artifactsDir = path.join(REPO_ROOT, '.artifacts');
+  await stopStrayInstances(dataDir);
+  fs.rmSync(dataDir, { recursive: true, force: true });
+  fs.mkdirSync(artifactsDir, { recursive: true });
+
+  let db: PrivateMariadb | null = null;
+  try {
+    db = await startPrivateMariadb({ dataDir, port: await freePort() });
+    const running = db;
+    process.once('exit', () => running.killNow());
+    console.log(`Test MariaDB on 127.0.0.1:${db.port} (data in ${db.dataDir}).`);
+    const password = generateSecret(18);
+    await ensureDatabase({
+      socket: db.socket,
+      database: TEST_DATABASE,
+      user: TEST_DATABASE,
+      password,
+      grantPattern: TEST_DATABASE_PATTERN,
+    });
+    checkInterrupted();
+    await ensureWebExport({ root: REPO_ROOT });
+    checkInterrupted();
+
+    const resultsFile = path.join(artifactsDir, 'jest-results.json');
+    fs.rmSync(resultsFile, { force: true });
+    const wantsOwnJson = args.some((a) => a === '--json' || a.startsWith('--outputFile'));
+    const code = await runJest(
+      wantsOwnJson ? args : [...args, '--json', `--outputFile=${resultsFile}`],
+      {
+        ...process.env,
+        NODE_ENV: 'test',
+        DB_HOST: '127.0.0.1',
+        DB_PORT: String(db.port),
+        DB_NAME: TEST_DATABASE,
+        DB_USER: TEST_DATABASE,
+        DB_PASSWORD: password,
+        DB_ROOT_SOCKET: db.socket,
+        ARTIFACTS_DIR: artifactsDir,
+      },
+    );
+    if (!wantsOwnJson && fs.existsSync(resultsFile)) {
+      console.log(summaryLine(JSON.parse(fs.readFileSync(resultsFile, 'utf8')) as JestSummary));
+    }
+    return interrupted ? 130 : code;
+  } finally {
+    if (db) {
+      await db.stop();
+      console.log('Test MariaDB shut down.');
+    }
+  }
+}
+
+for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+  process.on(signal, () => {
+    if (interrupted) return;
+    interrupted = signal;
+    console.log(`\n${signal}: stopping the tests, then the test database…`);
+    // From a terminal jest got the signal too; from a supervisor only we did.
+    jest?.kill(signal);
+  });
+}
+
+main().then((code) => process.exit(code), failAndExit);
