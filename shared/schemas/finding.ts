@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDateTime, uuid } from './common';
+import { isoDateTime, uuid, withoutDefaults } from './common';
 
 export const SEVERITIES = [0, 1, 2, 3, 4] as const;
 /** Plain description of each decay-severity level, shown beside the picker and in the legend. */
@@ -86,10 +86,15 @@ export type CreateFindingRequest = z.input<typeof createFindingRequest>;
 
 /** PATCH /api/workshops/:wid/findings/:fid — stale `version` → 409. */
 export const updateFindingRequest = z
-  .object(findingFields)
+  .object(withoutDefaults(findingFields))
   .partial()
   .extend({ version: z.number().int().min(0) });
 export type UpdateFindingRequest = z.input<typeof updateFindingRequest>;
+
+/** The text fields sent beside the files of POST /api/workshops/:wid/findings/:fid/photos. */
+export const uploadPhotosFields = z.object({
+  caption: z.string().trim().max(500, 'Keep the caption under 500 characters').default(''),
+});
 
 export const photoResponse = z.object({
   id: uuid,

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate, isoDateTime, uuid } from './common';
+import { isoDate, isoDateTime, uuid, withoutDefaults } from './common';
 
 export const SURVEY_PURPOSES = ['baseline', 'pre-purchase', 'post-treatment', 'progress'] as const;
 export type SurveyPurpose = (typeof SURVEY_PURPOSES)[number];
@@ -17,7 +17,9 @@ export const createSurveyRequest = z.object({
   notes: z.string().trim().max(4000).default(''),
 });
 export type CreateSurveyRequest = z.input<typeof createSurveyRequest>;
-export const updateSurveyRequest = createSurveyRequest.omit({ id: true }).partial();
+export const updateSurveyRequest = z
+  .object(withoutDefaults(createSurveyRequest.omit({ id: true }).shape))
+  .partial();
 
 export const surveyResponse = z.object({
   id: uuid,

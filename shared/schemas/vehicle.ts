@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDateTime, uuid } from './common';
+import { isoDateTime, uuid, withoutDefaults } from './common';
 
 export const STORAGE_PLACES = ['indoors', 'covered', 'outdoors'] as const;
 export const VEHICLE_STAGES = ['intake', 'surveying', 'treating', 'repairing', 'complete'] as const;
@@ -25,8 +25,8 @@ export const createVehicleRequest = z.object({
 export type CreateVehicleRequest = z.input<typeof createVehicleRequest>;
 
 /** PATCH — `version` is the version the editor loaded; a stale one answers 409. */
-export const updateVehicleRequest = createVehicleRequest
-  .omit({ id: true })
+export const updateVehicleRequest = z
+  .object(withoutDefaults(createVehicleRequest.omit({ id: true }).shape))
   .partial()
   .extend({ version: z.number().int().min(0) });
 export type UpdateVehicleRequest = z.input<typeof updateVehicleRequest>;

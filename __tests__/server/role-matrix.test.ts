@@ -1,0 +1,529 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import { startMailSink, type MailSink } from '@/server/mail/sink';
+import { AuditEntry } from '@/server/models';
+import type { StorageAdapter } from '@/server/storage';
+import { can, type Action } from '@/shared/roles';
+import {
+  buildFinding,
+  buildVehicle,
+  createFinding,
+  createMember,
+  createSurvey,
+  createUser,
+  createVehicle,
+  createWorkshopWithTeam,
+  grantAccess,
+  TEST_PASSWORD,
+  unique,
+} from '../factories';
+import { createInvitation } from '../factories/invitations';
+import { appStorage, createPhoto, jpeg } from '../factories/photos';
+import { buildTestApp, type TestApp } from './support/test-app';
+
+/**
+ * Every route of the DEVELOPERS.md API table × every kind of caller. The expected answer follows
+ * from shared/roles.ts: 401 without a session, 404 for someone outside the workshop, 403 for a
+ * member whose role lacks the action, 404 for a client on a vehicle not shared with them, and the
+ * route's success status otherwise. A new route is one row in ROUTES.
+ */
+
+type Member = Awaited<ReturnType<typeof createMember>>;
+type Team = Awaited<ReturnType<typeof createWorkshopWithTeam>>;
+type ActorName =
+  | 'owner'
+  | 'inspector'
+  | 'applicator'
+  | 'client'
+  | 'client (not shared)'
+  | 'non-member'
+  | 'anonymous';
+type Actor = { name: ActorName; member: Member | null };
+
+/** Fresh records for one request, so a write in one case never changes what the next one sees. */
+type Fixture = Awaited<ReturnType<typeof freshRecords>> & { actor: Actor };
+type Req = { url: string; body?: Record<string, unknown>; photo?: boolean };
+
+type Row = {
+  /** Method and path exactly as in the DEVELOPERS.md table. */
+  route: string;
+  /** What the caller needs: an action from shared/roles.ts, or no workshop membership at all. */
+  needs: Action | 'anyone' | 'signed-in';
+  /** Hangs off one vehicle, so a client needs it shared with them. */
+  vehicle?: boolean;
+  ok: number;
+  label?: string;
+  build: (f: Fixture) => Promise<Req> | Req;
+};
+
+let t: TestApp;
+let sink: MailSink;
+let mailDir: string;
+let storage: StorageAdapter;
+let team: Team;
+let unsharedClient: Member;
+let outsider: Member;
+
+beforeAll(async () => {
+  mailDir = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-matrix-mail-'));
+  sink = await startMailSink({ port: 0, dir: mailDir });
+  t = buildTestApp({ SMTP_PORT: String(sink.port), MAIL_SINK_DIR: mailDir });
+  storage = appStorage(t.app);
+  team = await createWorkshopWithTeam(t.config);
+  unsharedClient = await createMember(t.config, team.workshop, 'client');
+  outsider = (await createWorkshopWithTeam(t.config)).owner;
+});
+afterAll(async () => {
+  await t.close();
+  await sink.close();
+  fs.rmSync(mailDir, { recursive: true, force: true });
+});
+
+async function freshRecords() {
+  const vehicle = await createVehicle(team.workshop);
+  await grantAccess(vehicle, team.client.user.id);
+  const survey = await createSurvey(vehicle);
+  const finding = await createFinding(survey);
+  const photo = await createPhoto(finding, storage);
+  return { vehicle, survey, finding, photo, w: `/api/workshops/${team.workshop.id}` };
+}
+
+const ROUTES: Row[] = [
+  // Auth and invitations (signed-out side)
+  {
+    route: 'POST /api/auth/sign-up',
+    needs: 'anyone',
+    ok: 201,
+    build: () => ({
+      url: '/api/auth/sign-up',
+      body: {
+        workshopName: unique('Shop'),
+        name: 'New Owner',
+        email: `${unique('su')}@example.test`,
+        password: TEST_PASSWORD,
+      },
+    }),
+  },
+  {
+    route: 'POST /api/auth/sign-in',
+    needs: 'anyone',
+    ok: 200,
+    build: async (f) => ({
+      url: '/api/auth/sign-in',
+      body: {
+        email: f.actor.member?.user.email ?? (await createUser()).email,
+        password: TEST_PASSWORD,
+      },
+    }),
+  },
+  // Idempotent by design: signing out without a session still clears cookies.
+  {
+    route: 'POST /api/auth/sign-out',
+    needs: 'anyone',
+    ok: 204,
+    build: () => ({ url: '/api/auth/sign-out' }),
+  },
+  {
+    route: 'GET /api/auth/session',
+    needs: 'signed-in',
+    ok: 200,
+    build: () => ({ url: '/api/auth/session' }),
+  },
+  {
+    route: 'GET /api/invitations/:token',
+    needs: 'anyone',
+    ok: 200,
+    build: async () => ({
+      url: `/api/invitations/${(await createInvitation(team.workshop)).token}`,
+    }),
+  },
+  {
+    route: 'POST /api/invitations/:token/accept',
+    needs: 'anyone',
+    ok: 200,
+    build: async () => ({
+      url: `/api/invitations/${(await createInvitation(team.workshop)).token}/accept`,
+      body: { name: 'Invitee', password: TEST_PASSWORD },
+    }),
+  },
+  {
+    route: 'GET /api/dev/outbox',
+    needs: 'anyone',
+    ok: 200,
+    build: () => ({ url: '/api/dev/outbox' }),
+  },
+
+  // Workshop, members, invitations, audit
+  {
+    route: 'GET /api/workshops/:wid',
+    needs: 'workshop.read',
+    ok: 200,
+    build: (f) => ({ url: f.w }),
+  },
+  {
+    route: 'PATCH /api/workshops/:wid',
+    needs: 'workshop.update',
+    ok: 200,
+    build: (f) => ({ url: f.w, body: { settings: { region: unique('Region') } } }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/members',
+    needs: 'members.read',
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/members` }),
+  },
+  {
+    route: 'PATCH /api/workshops/:wid/members/:mid',
+    needs: 'members.manage',
+    ok: 200,
+    build: async (f) => ({
+      url: `${f.w}/members/${(await createMember(t.config, team.workshop, 'inspector')).membership.id}`,
+      body: { role: 'applicator' },
+    }),
+  },
+  {
+    route: 'DELETE /api/workshops/:wid/members/:mid',
+    needs: 'members.manage',
+    ok: 204,
+    build: async (f) => ({
+      url: `${f.w}/members/${(await createMember(t.config, team.workshop, 'applicator')).membership.id}`,
+    }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/invitations',
+    needs: 'members.manage',
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/invitations` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/invitations',
+    needs: 'members.manage',
+    ok: 201,
+    build: (f) => ({
+      url: `${f.w}/invitations`,
+      body: { email: `${unique('inv')}@example.test`, role: 'inspector' },
+    }),
+  },
+  {
+    route: 'DELETE /api/workshops/:wid/invitations/:iid',
+    needs: 'members.manage',
+    ok: 204,
+    build: async (f) => ({
+      url: `${f.w}/invitations/${(await createInvitation(team.workshop)).invitation.id}`,
+    }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/audit',
+    needs: 'audit.read',
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/audit` }),
+  },
+
+  // Vehicles and sharing
+  {
+    route: 'GET /api/workshops/:wid/vehicles',
+    needs: 'vehicles.read',
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles` }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles',
+    label: '?deleted=only',
+    needs: 'vehicles.delete',
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles?deleted=only` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/vehicles',
+    needs: 'vehicles.write',
+    ok: 201,
+    build: (f) => ({ url: `${f.w}/vehicles`, body: buildVehicle({ make: unique('Make') }) }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}` }),
+  },
+  {
+    route: 'PATCH /api/workshops/:wid/vehicles/:vid',
+    needs: 'vehicles.write',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({
+      url: `${f.w}/vehicles/${f.vehicle.id}`,
+      body: { version: 0, notes: 'Edited' },
+    }),
+  },
+  {
+    route: 'DELETE /api/workshops/:wid/vehicles/:vid',
+    needs: 'vehicles.delete',
+    vehicle: true,
+    ok: 204,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/vehicles/:vid/restore',
+    needs: 'vehicles.delete',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await f.vehicle.destroy();
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/restore` };
+    },
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/access',
+    needs: 'vehicles.share',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/access` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/vehicles/:vid/access',
+    needs: 'vehicles.share',
+    vehicle: true,
+    ok: 201,
+    build: async (f) => ({
+      url: `${f.w}/vehicles/${f.vehicle.id}/access`,
+      body: { userId: (await createMember(t.config, team.workshop, 'client')).user.id },
+    }),
+  },
+  {
+    route: 'DELETE /api/workshops/:wid/vehicles/:vid/access/:userId',
+    needs: 'vehicles.share',
+    vehicle: true,
+    ok: 204,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/access/${team.client.user.id}` }),
+  },
+
+  // Surveys
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/surveys',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/surveys` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/vehicles/:vid/surveys',
+    needs: 'surveys.write',
+    vehicle: true,
+    ok: 201,
+    build: (f) => ({
+      url: `${f.w}/vehicles/${f.vehicle.id}/surveys`,
+      body: { date: '2026-11-30', purpose: 'progress' },
+    }),
+  },
+  {
+    route: 'PATCH /api/workshops/:wid/surveys/:sid',
+    needs: 'surveys.write',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/surveys/${f.survey.id}`, body: { notes: 'Edited' } }),
+  },
+
+  // Findings
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/findings',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/findings` }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/findings',
+    label: '?deleted=include',
+    needs: 'findings.write',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/findings?deleted=include` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/surveys/:sid/findings',
+    needs: 'findings.write',
+    vehicle: true,
+    ok: 201,
+    build: (f) => ({
+      url: `${f.w}/surveys/${f.survey.id}/findings`,
+      body: buildFinding({ zoneKey: 'sill-right' }),
+    }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/findings/:fid',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/findings/${f.finding.id}` }),
+  },
+  {
+    route: 'PATCH /api/workshops/:wid/findings/:fid',
+    needs: 'findings.write',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/findings/${f.finding.id}`, body: { version: 0, severity: 3 } }),
+  },
+  {
+    route: 'DELETE /api/workshops/:wid/findings/:fid',
+    needs: 'findings.write',
+    vehicle: true,
+    ok: 204,
+    build: (f) => ({ url: `${f.w}/findings/${f.finding.id}` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/findings/:fid/restore',
+    needs: 'findings.write',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await f.finding.destroy();
+      return { url: `${f.w}/findings/${f.finding.id}/restore` };
+    },
+  },
+
+  // Photos
+  {
+    route: 'POST /api/workshops/:wid/findings/:fid/photos',
+    needs: 'photos.write',
+    vehicle: true,
+    ok: 201,
+    build: (f) => ({ url: `${f.w}/findings/${f.finding.id}/photos`, photo: true }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/photos/:pid/thumb',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/photos/${f.photo.id}/thumb` }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/photos/:pid/display',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/photos/${f.photo.id}/display` }),
+  },
+  {
+    route: 'DELETE /api/workshops/:wid/photos/:pid',
+    needs: 'photos.write',
+    vehicle: true,
+    ok: 204,
+    build: (f) => ({ url: `${f.w}/photos/${f.photo.id}` }),
+  },
+];
+
+const ACTORS: ActorName[] = [
+  'owner',
+  'inspector',
+  'applicator',
+  'client',
+  'client (not shared)',
+  'non-member',
+  'anonymous',
+];
+
+function actor(name: ActorName): Actor {
+  const member =
+    name === 'anonymous'
+      ? null
+      : name === 'non-member'
+        ? outsider
+        : name === 'client (not shared)'
+          ? unsharedClient
+          : team[name];
+  return { name, member };
+}
+
+/** The designed answer, from shared/roles.ts. */
+function expected(row: Row, a: Actor): number {
+  if (row.needs === 'anyone') return row.ok;
+  if (!a.member) return 401;
+  if (row.needs === 'signed-in') return row.ok;
+  if (a.name === 'non-member') return 404;
+  if (!can(a.member.membership.role, row.needs)) return 403;
+  if (row.vehicle && a.name === 'client (not shared)') return 404;
+  return row.ok;
+}
+
+const CODES: Record<number, string> = {
+  401: 'unauthenticated',
+  403: 'forbidden',
+  404: 'not_found',
+};
+
+describe.each(ROUTES.map((r) => [`${r.route}${r.label ? ` ${r.label}` : ''}`, r] as const))(
+  '%s',
+  (_name, row) => {
+    it.each(ACTORS)('as %s', async (name) => {
+      const a = actor(name);
+      const req = await row.build({ ...(await freshRecords()), actor: a });
+      const method = row.route.split(' ')[0].toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
+      let call = request(t.app)[method](req.url);
+      if (a.member) call = call.set(a.member.auth);
+      if (req.photo) call = call.attach('photos', await jpeg(), 'sill.jpg');
+      else if (req.body) call = call.send(req.body);
+      const auditBefore = await AuditEntry.count({ where: { workshopId: team.workshop.id } });
+
+      const res = await call;
+      const want = expected(row, a);
+      expect({ status: res.status, error: res.body?.error?.code }).toEqual({
+        status: want,
+        error: CODES[want] ?? undefined,
+      });
+      // A refused request writes nothing.
+      if (want >= 400)
+        expect(await AuditEntry.count({ where: { workshopId: team.workshop.id } })).toBe(
+          auditBefore,
+        );
+    });
+  },
+);
+
+/** The routes of the DEVELOPERS.md API table, expanded from its shorthand ("GET/POST `…/x`"). */
+function documentedRoutes(): string[] {
+  const doc = fs.readFileSync(path.join(__dirname, '..', '..', 'DEVELOPERS.md'), 'utf8');
+  const routes: string[] = [];
+  for (const line of doc.split('\n')) {
+    if (!line.startsWith('| ') || !line.includes('`/api')) continue;
+    const cell = line.split('|')[1];
+    let methods: string[] = [];
+    let previous = '';
+    for (const m of cell.matchAll(/(?:([A-Z]+(?:\/[A-Z]+)*)\s+)?`([^`]+)`/g)) {
+      if (m[1]) methods = m[1].split('/');
+      let p = m[2];
+      if (p.startsWith('…')) {
+        const rel = p.slice(1).split('/').filter(Boolean);
+        const prev = previous.split('/');
+        const last = prev[prev.length - 1];
+        // "…/access/:userId" after ".../access" and "…/display" after ".../thumb" replace the last segment;
+        // "…/restore" after ".../:vid" and "…/:iid" after ".../invitations" extend the path.
+        const extend = rel[0] !== last && (last.startsWith(':') || rel[0].startsWith(':'));
+        p = [...(extend ? prev : prev.slice(0, -1)), ...rel].join('/');
+      }
+      previous = p;
+      for (const method of methods) routes.push(`${method} ${p}`);
+    }
+  }
+  return routes;
+}
+
+const shape = (route: string) => route.replace(/:\w+/g, ':param');
+
+it('covers every route of the DEVELOPERS.md API table, and no route the table lacks', () => {
+  const documented = documentedRoutes().map(shape);
+  expect(documented.length).toBeGreaterThan(30);
+  expect([...new Set(ROUTES.map((r) => shape(r.route)))].sort()).toEqual(
+    [...new Set(documented)].sort(),
+  );
+});
+
+it('checks a client on an unshared vehicle separately from the roles table (404, not 403)', () => {
+  // Guards the table above against a roles change that would make the not-shared case vacuous.
+  expect(can('client', 'vehicles.read')).toBe(true);
+  expect(
+    ROUTES.filter((r) => r.vehicle && r.needs === 'vehicles.read').length,
+  ).toBeGreaterThanOrEqual(6);
+});
