@@ -39,6 +39,7 @@ export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
     async close() {
       mailer.close();
       await sequelize.close();
+      if (config.storage.driver === 'local') fs.rmSync(config.storage.dir, { recursive: true, force: true });
     },
   };
 }

@@ -1,0 +1,1 @@
+export { BodyPlanPreview } from './body-plan-preview';

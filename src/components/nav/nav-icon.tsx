@@ -1,0 +1,59 @@
+import Svg, { Circle, Path, Rect } from 'react-native-svg';
+import type { NavKey } from './nav-items';
+
+/** Small line drawings of our own for the navigation entries (always shown with a text label). */
+export function NavIcon({
+  name,
+  color,
+  size = 24,
+}: {
+  name: NavKey;
+  color: string;
+  size?: number;
+}) {
+  const stroke = {
+    stroke: color,
+    strokeWidth: 2,
+    fill: 'none',
+    strokeLinecap: 'round' as const,
+    strokeLinejoin: 'round' as const,
+  };
+  return (
+    <Svg
+      width={size}
+      height={size}
+      viewBox="0 0 24 24"
+      accessibilityElementsHidden
+      importantForAccessibility="no"
+    >
+      {name === 'vehicles' ? (
+        <>
+          <Path d="M2 16 V12 L5 11 L8 7 H15 L19 11 L22 12 V16 Z" {...stroke} />
+          <Path d="M8 7 V11 M12 7 V11" {...stroke} />
+          <Circle cx={6.5} cy={16.5} r={2} {...stroke} />
+          <Circle cx={17.5} cy={16.5} r={2} {...stroke} />
+        </>
+      ) : null}
+      {name === 'team' ? (
+        <>
+          <Circle cx={8} cy={8} r={3} {...stroke} />
+          <Path d="M2.5 19 C3 15 5 13.5 8 13.5 C11 13.5 13 15 13.5 19" {...stroke} />
+          <Circle cx={16.5} cy={9} r={2.5} {...stroke} />
+          <Path d="M15 14 C18.5 13.5 21 15 21.5 18.5" {...stroke} />
+        </>
+      ) : null}
+      {name === 'mail' ? (
+        <>
+          <Rect x={3} y={5.5} width={18} height={13} rx={2} {...stroke} />
+          <Path d="M3.5 7 L12 13 L20.5 7" {...stroke} />
+        </>
+      ) : null}
+      {name === 'account' ? (
+        <>
+          <Circle cx={12} cy={8.5} r={3.5} {...stroke} />
+          <Path d="M5 20 C5.5 15.5 8 13.5 12 13.5 C16 13.5 18.5 15.5 19 20" {...stroke} />
+        </>
+      ) : null}
+    </Svg>
+  );
+}

@@ -1,0 +1,37 @@
+import { can, type Role } from '@/shared/roles';
+
+export type NavKey = 'vehicles' | 'team' | 'mail' | 'account';
+export type NavItem = {
+  key: NavKey;
+  label: string;
+  href: '/vehicles' | '/members' | '/outbox' | '/account';
+};
+
+const ALL: NavItem[] = [
+  { key: 'vehicles', label: 'Vehicles', href: '/vehicles' },
+  { key: 'team', label: 'Team', href: '/members' },
+  { key: 'mail', label: 'Mail', href: '/outbox' },
+  { key: 'account', label: 'Account', href: '/account' },
+];
+
+/**
+ * The entries this role can use; "Mail" only while the development outbox answers. Hiding is
+ * a courtesy: the server refuses the same actions anyway.
+ */
+export function navItemsFor(role: Role, outboxAvailable: boolean): NavItem[] {
+  return ALL.filter((item) => {
+    if (item.key === 'vehicles') return can(role, 'vehicles.read');
+    if (item.key === 'team') return can(role, 'members.read');
+    if (item.key === 'mail') return outboxAvailable;
+    return true;
+  });
+}
+
+/** Which entry a path belongs to ('/' is the vehicles list). */
+export function activeNavKey(pathname: string): NavKey | null {
+  if (pathname === '/' || pathname.startsWith('/vehicles')) return 'vehicles';
+  if (pathname.startsWith('/members')) return 'team';
+  if (pathname.startsWith('/outbox')) return 'mail';
+  if (pathname.startsWith('/account')) return 'account';
+  return null;
+}

@@ -1,0 +1,2 @@
+/** Native platforms draw focus themselves. */
+export function installFocusStyle() {}

@@ -1,0 +1,14 @@
+export { AppText, type TextVariant } from './app-text';
+export { Badge, SeverityBadge, type BadgeTone } from './badge';
+export { Button, type ButtonVariant } from './button';
+export { Card } from './card';
+export { Checkbox, ChipToggle, SegmentedControl, Select, type Option } from './choice';
+export { ConfirmDialog } from './confirm-dialog';
+export { installFocusStyle } from './focus-style';
+export { Screen } from './screen';
+export { EmptyState, ErrorView, LoadingView } from './states';
+export { TextField } from './text-field';
+export { ToastProvider, useToast, type ToastKind, type ToastOptions } from './toast';
+export { serverFieldErrors, zodFieldErrors, type FieldErrors } from './form-errors';
+export { FieldErrorsNotice, FormMessage } from './form-message';
+export { useFormSubmit } from './use-form-submit';
