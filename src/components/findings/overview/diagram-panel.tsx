@@ -1,0 +1,100 @@
+import { useState } from 'react';
+import { ScrollView, StyleSheet, View, type LayoutChangeEvent } from 'react-native';
+import type { BodyPlan, ViewKey } from '@/shared/body-plans';
+import {
+  BodyDiagram,
+  DiagramLegend,
+  ViewSwitcher,
+  type DiagramPin,
+  type ViewPoint,
+  type ZoneSummary,
+} from '@/src/components/body-diagram';
+import { AppText, Button } from '@/src/components/ui';
+import { colors, radius, spacing } from '@/src/theme';
+
+// Enlarged, a phone-width drawing gets members a fingertip wide; it then scrolls sideways.
+const ZOOM = 2.2;
+
+/** View buttons, the drawing (fitted or enlarged) and its legend, as one card. */
+export function DiagramPanel({
+  plan,
+  view,
+  onViewChange,
+  zoneSummaries,
+  pins,
+  selectedZone,
+  onZonePress,
+  maxHeight,
+  canLog,
+}: {
+  plan: BodyPlan;
+  view: ViewKey;
+  onViewChange(view: ViewKey): void;
+  zoneSummaries: Record<string, ZoneSummary>;
+  pins: DiagramPin[];
+  selectedZone?: string;
+  onZonePress(zoneKey: string, point?: ViewPoint): void;
+  maxHeight?: number;
+  canLog: boolean;
+}) {
+  const [zoomed, setZoomed] = useState(false);
+  const [width, setWidth] = useState(0);
+  const onLayout = (e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width));
+  const diagram = (
+    <BodyDiagram
+      plan={plan}
+      view={view}
+      zoneSummaries={zoneSummaries}
+      pins={pins}
+      selectedZone={selectedZone}
+      onZonePress={onZonePress}
+      maxHeight={zoomed && maxHeight ? maxHeight * ZOOM : maxHeight}
+      width={zoomed && width ? width * ZOOM : undefined}
+      testID="body-diagram"
+    />
+  );
+  return (
+    <View style={styles.card}>
+      <ViewSwitcher plan={plan} value={view} onChange={onViewChange} />
+      <View style={styles.hintRow}>
+        <AppText variant="caption" muted style={styles.hint}>
+          {canLog
+            ? 'Tap a member to see its findings, or to log one where you tapped.'
+            : 'Tap a member to see its findings.'}
+        </AppText>
+        <Button
+          label={zoomed ? 'Fit to screen' : 'Enlarge'}
+          variant="ghost"
+          compact
+          onPress={() => setZoomed(!zoomed)}
+          accessibilityLabel={zoomed ? 'Fit the drawing to the screen' : 'Enlarge the drawing'}
+          testID="diagram-zoom"
+        />
+      </View>
+      <View onLayout={onLayout}>
+        {zoomed ? (
+          <ScrollView horizontal contentContainerStyle={styles.scroller} testID="diagram-scroller">
+            {diagram}
+          </ScrollView>
+        ) : (
+          diagram
+        )}
+      </View>
+      <DiagramLegend />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: {
+    gap: spacing.sm,
+    padding: spacing.md,
+    borderRadius: radius.lg,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
+  hintRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
+  hint: { flex: 1 },
+  scroller: { flexGrow: 0 },
+});

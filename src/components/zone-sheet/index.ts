@@ -1,0 +1,1 @@
+export { ZoneSheet } from './zone-sheet';
