@@ -7,7 +7,10 @@ const cacheDirectory = path.join(__dirname, '.jest-cache');
 const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
 const tsJest = [
   'ts-jest',
-  { tsconfig: { jsx: 'react-jsx', esModuleInterop: true, isolatedModules: true }, diagnostics: false },
+  {
+    tsconfig: { jsx: 'react-jsx', esModuleInterop: true, isolatedModules: true },
+    diagnostics: false,
+  },
 ];
 
 module.exports = {

@@ -82,7 +82,10 @@ function serveWebExport(app: express.Express, dist: string) {
   app.use((req, res, next) => {
     if (req.method !== 'GET' || path.extname(req.path) || !req.accepts('html')) return next();
     if (!fs.existsSync(index))
-      return res.status(503).type('text/plain').send('The web app has not been built yet. Run npm start, which builds it.');
+      return res
+        .status(503)
+        .type('text/plain')
+        .send('The web app has not been built yet. Run npm start, which builds it.');
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(index);
   });

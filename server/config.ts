@@ -13,12 +13,20 @@ const envSchema = z
     PUBLIC_URL: z.url().optional(),
     DB_HOST: z.string().default('127.0.0.1'),
     DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
-    DB_NAME: z.string().regex(/^[A-Za-z0-9_]+$/).default('soundframe'),
+    DB_NAME: z
+      .string()
+      .regex(/^[A-Za-z0-9_]+$/)
+      .default('soundframe'),
     DB_USER: z.string().min(1).default('soundframe'),
     DB_PASSWORD: z.string().default(''),
     DB_POOL_MAX: z.coerce.number().int().min(1).max(50).default(5),
     JWT_SECRET: z.string().optional(),
-    JWT_TTL_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(60),
+    JWT_TTL_MINUTES: z.coerce
+      .number()
+      .int()
+      .min(1)
+      .max(24 * 60)
+      .default(60),
     BCRYPT_COST: z.coerce.number().int().min(10).max(15).default(10),
     SMTP_HOST: z.string().default('127.0.0.1'),
     SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
@@ -38,9 +46,17 @@ const envSchema = z
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && (!env.JWT_SECRET || env.JWT_SECRET.length < 32))
-      ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'set JWT_SECRET (32+ characters) in production' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['JWT_SECRET'],
+        message: 'set JWT_SECRET (32+ characters) in production',
+      });
     if (env.STORAGE_DRIVER === 's3' && (!env.S3_ACCESS_KEY_ID || !env.S3_SECRET_ACCESS_KEY))
-      ctx.addIssue({ code: 'custom', path: ['S3_ACCESS_KEY_ID'], message: 'S3 storage needs S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['S3_ACCESS_KEY_ID'],
+        message: 'S3 storage needs S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY',
+      });
   });
 
 export type Config = ReturnType<typeof loadConfig>;
@@ -63,7 +79,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     host: e.HOST,
     port: e.PORT,
     publicUrl: e.PUBLIC_URL,
-    db: { host: e.DB_HOST, port: e.DB_PORT, name: e.DB_NAME, user: e.DB_USER, password: e.DB_PASSWORD, poolMax: e.DB_POOL_MAX },
+    db: {
+      host: e.DB_HOST,
+      port: e.DB_PORT,
+      name: e.DB_NAME,
+      user: e.DB_USER,
+      password: e.DB_PASSWORD,
+      poolMax: e.DB_POOL_MAX,
+    },
     jwt: {
       secret: e.JWT_SECRET ?? DEV_JWT_SECRET,
       ttlMinutes: e.JWT_TTL_MINUTES,
@@ -71,7 +94,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
       audience: 'soundframe-app',
     },
     bcryptCost: e.BCRYPT_COST,
-    mail: { host: e.SMTP_HOST, port: e.SMTP_PORT, from: e.MAIL_FROM, sinkDir: path.resolve(root, e.MAIL_SINK_DIR) },
+    mail: {
+      host: e.SMTP_HOST,
+      port: e.SMTP_PORT,
+      from: e.MAIL_FROM,
+      sinkDir: path.resolve(root, e.MAIL_SINK_DIR),
+    },
     storage:
       e.STORAGE_DRIVER === 's3'
         ? {

@@ -3,7 +3,10 @@ import type { Config } from './config';
 import { initModels } from './models';
 
 /** One Sequelize instance per process (tests make one per database). Models are initialised on it. */
-export function createSequelize(config: Pick<Config, 'db'>, opts: { logging?: boolean } = {}): Sequelize {
+export function createSequelize(
+  config: Pick<Config, 'db'>,
+  opts: { logging?: boolean } = {},
+): Sequelize {
   const sequelize = new Sequelize(config.db.name, config.db.user, config.db.password, {
     host: config.db.host,
     port: config.db.port,

@@ -13,7 +13,8 @@ export class AppError extends Error {
   }
 }
 
-export const notFound = (what = 'Record') => new AppError(404, ERROR_CODES.notFound, `${what} not found.`);
+export const notFound = (what = 'Record') =>
+  new AppError(404, ERROR_CODES.notFound, `${what} not found.`);
 export const forbidden = (message = 'Your role in this workshop does not allow that.') =>
   new AppError(403, ERROR_CODES.forbidden, message);
 export const unauthenticated = (message = 'Sign in to continue.') =>

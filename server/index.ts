@@ -14,7 +14,11 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
   const sequelize = opts.sequelize ?? createSequelize(config);
   await sequelize.authenticate();
   const storage = createStorage(config.storage);
-  const mailer = createMailer({ host: config.mail.host, port: config.mail.port, from: config.mail.from });
+  const mailer = createMailer({
+    host: config.mail.host,
+    port: config.mail.port,
+    from: config.mail.from,
+  });
   const app = createApp({ config, storage, mailer });
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.port, config.host, () => resolve(s));

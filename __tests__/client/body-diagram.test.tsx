@@ -124,7 +124,9 @@ describe('BodyDiagram severity cues', () => {
 describe('BodyDiagram size', () => {
   it('keeps the view’s proportions at a given width (an enlarged drawing)', () => {
     renderView(fixturePlan, 'top', { width: 840, testID: 'diagram' });
-    const svg = screen.getByTestId('diagram').findAll((n) => (n.type as unknown) === 'RNSVGSvgView')[0];
+    const svg = screen
+      .getByTestId('diagram')
+      .findAll((n) => (n.type as unknown) === 'RNSVGSvgView')[0];
     // The top view is 1000 × 420 units.
     expect(svg.props.bbWidth).toBe(840);
     expect(svg.props.bbHeight).toBeCloseTo(352.8);

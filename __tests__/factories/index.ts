@@ -3,7 +3,15 @@ import bcrypt from 'bcryptjs';
 import type { Role } from '@/shared/roles';
 import type { Config } from '@/server/config';
 import { signSessionToken } from '@/server/middleware/auth';
-import { Finding, Membership, Survey, User, Vehicle, VehicleAccess, Workshop } from '@/server/models';
+import {
+  Finding,
+  Membership,
+  Survey,
+  User,
+  Vehicle,
+  VehicleAccess,
+  Workshop,
+} from '@/server/models';
 import { hashPasswordInput } from '@/server/services/passwords';
 
 /** Unique per call so tests never collide on shared rows. */
@@ -29,7 +37,12 @@ export async function createUser(partial: Partial<{ name: string; email: string 
 }
 
 /** A user with a role in a workshop, and a Bearer header for supertest. */
-export async function createMember(config: Config, workshop: Workshop, role: Role, partial: Partial<{ name: string; email: string }> = {}) {
+export async function createMember(
+  config: Config,
+  workshop: Workshop,
+  role: Role,
+  partial: Partial<{ name: string; email: string }> = {},
+) {
   const user = await createUser(partial);
   const membership = await Membership.create({ workshopId: workshop.id, userId: user.id, role });
   const token = signSessionToken(config, user.id);
@@ -56,15 +69,29 @@ export function buildVehicle(partial: Partial<Vehicle['_creationAttributes']> = 
   };
 }
 
-export async function createVehicle(workshop: Workshop, partial: Partial<Vehicle['_creationAttributes']> = {}) {
-  return Vehicle.create({ workshopId: workshop.id, ...buildVehicle(partial) } as Vehicle['_creationAttributes']);
+export async function createVehicle(
+  workshop: Workshop,
+  partial: Partial<Vehicle['_creationAttributes']> = {},
+) {
+  return Vehicle.create({
+    workshopId: workshop.id,
+    ...buildVehicle(partial),
+  } as Vehicle['_creationAttributes']);
 }
 
 export async function grantAccess(vehicle: Vehicle, userId: string) {
-  return VehicleAccess.create({ workshopId: vehicle.workshopId, vehicleId: vehicle.id, userId, grantedById: null });
+  return VehicleAccess.create({
+    workshopId: vehicle.workshopId,
+    vehicleId: vehicle.id,
+    userId,
+    grantedById: null,
+  });
 }
 
-export async function createSurvey(vehicle: Vehicle, partial: Partial<Survey['_creationAttributes']> = {}) {
+export async function createSurvey(
+  vehicle: Vehicle,
+  partial: Partial<Survey['_creationAttributes']> = {},
+) {
   return Survey.create({
     workshopId: vehicle.workshopId,
     vehicleId: vehicle.id,
@@ -89,7 +116,10 @@ export function buildFinding(partial: Record<string, unknown> = {}) {
   };
 }
 
-export async function createFinding(survey: Survey, partial: Partial<Finding['_creationAttributes']> = {}) {
+export async function createFinding(
+  survey: Survey,
+  partial: Partial<Finding['_creationAttributes']> = {},
+) {
   return Finding.create({
     workshopId: survey.workshopId,
     vehicleId: survey.vehicleId,

@@ -39,7 +39,12 @@ function verify(config: Config, token: string): string | null {
 /** Sets the session and CSRF cookies for the web client; returns the CSRF value. */
 export function setSessionCookies(res: Response, config: Config, token: string): string {
   const csrf = crypto.randomBytes(24).toString('base64url');
-  const common = { sameSite: 'lax' as const, secure: config.production, path: '/', maxAge: config.jwt.ttlMinutes * 60_000 };
+  const common = {
+    sameSite: 'lax' as const,
+    secure: config.production,
+    path: '/',
+    maxAge: config.jwt.ttlMinutes * 60_000,
+  };
   res.cookie(SESSION_COOKIE, token, { ...common, httpOnly: true });
   res.cookie(CSRF_COOKIE, csrf, { ...common, httpOnly: false });
   return csrf;
@@ -75,7 +80,9 @@ export function authenticate(config: Config) {
       const sent = req.get(CSRF_HEADER) ?? '';
       const expected = (req.cookies?.[CSRF_COOKIE] as string | undefined) ?? '';
       if (!expected || !safeEqual(sent, expected))
-        return next(new AppError(403, ERROR_CODES.csrf, 'The form expired. Reload the page and try again.'));
+        return next(
+          new AppError(403, ERROR_CODES.csrf, 'The form expired. Reload the page and try again.'),
+        );
     }
     res.locals.auth = { userId, via: 'cookie' } satisfies AuthContext;
     next();

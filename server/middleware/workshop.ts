@@ -4,7 +4,12 @@ import { forbidden, notFound } from '../errors';
 import { Membership } from '../models';
 import { authOf } from './auth';
 
-export type MemberContext = { membershipId: string; workshopId: string; userId: string; role: Role };
+export type MemberContext = {
+  membershipId: string;
+  workshopId: string;
+  userId: string;
+  role: Role;
+};
 
 /**
  * Resolves `:workshopId` to the caller's membership. Not a member → 404, so another
@@ -17,7 +22,12 @@ export async function loadMembership(req: Request, res: Response, next: NextFunc
     ? await Membership.findOne({ where: { workshopId, userId } })
     : null;
   if (!m) return next(notFound('Workshop'));
-  res.locals.member = { membershipId: m.id, workshopId, userId, role: m.role } satisfies MemberContext;
+  res.locals.member = {
+    membershipId: m.id,
+    workshopId,
+    userId,
+    role: m.role,
+  } satisfies MemberContext;
   next();
 }
 

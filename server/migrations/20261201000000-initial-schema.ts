@@ -40,7 +40,10 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     role: { type: DataTypes.ENUM(...ROLES), allowNull: false },
     ...timestamps,
   });
-  await qi.addIndex('memberships', ['workshop_id', 'user_id'], { unique: true, name: 'memberships_workshop_user' });
+  await qi.addIndex('memberships', ['workshop_id', 'user_id'], {
+    unique: true,
+    name: 'memberships_workshop_user',
+  });
 
   await qi.createTable('invitations', {
     id,
@@ -84,7 +87,10 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     granted_by_id: ref('users', 'SET NULL', true),
     ...timestamps,
   });
-  await qi.addIndex('vehicle_access', ['vehicle_id', 'user_id'], { unique: true, name: 'vehicle_access_vehicle_user' });
+  await qi.addIndex('vehicle_access', ['vehicle_id', 'user_id'], {
+    unique: true,
+    name: 'vehicle_access_vehicle_user',
+  });
 
   await qi.createTable('surveys', {
     id,
@@ -159,6 +165,17 @@ export async function up({ context: qi }: { context: QueryInterface }) {
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  for (const t of ['audit_entries', 'photos', 'findings', 'surveys', 'vehicle_access', 'vehicles', 'invitations', 'memberships', 'users', 'workshops'])
+  for (const t of [
+    'audit_entries',
+    'photos',
+    'findings',
+    'surveys',
+    'vehicle_access',
+    'vehicles',
+    'invitations',
+    'memberships',
+    'users',
+    'workshops',
+  ])
     await qi.dropTable(t);
 }

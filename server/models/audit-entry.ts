@@ -1,10 +1,22 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './user';
 import type { Workshop } from './workshop';
 import { jsonColumn } from './json-column';
 
 /** Who changed what, when. Written in the same transaction as the change it records. */
-export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreationAttributes<AuditEntry>> {
+export class AuditEntry extends Model<
+  InferAttributes<AuditEntry>,
+  InferCreationAttributes<AuditEntry>
+> {
   declare id: CreationOptional<string>;
   declare workshopId: ForeignKey<Workshop['id']> | null;
   declare actorId: ForeignKey<User['id']> | null;

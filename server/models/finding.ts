@@ -1,4 +1,13 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import { ACTIVITY, DECAY_TYPES, PICK_TEST, type INSECT_EVIDENCE } from '@/shared/schemas/finding';
 import type { Photo } from './photo';
 import type { Survey } from './survey';
@@ -8,7 +17,11 @@ import type { Vehicle } from './vehicle';
 import type { Workshop } from './workshop';
 import { jsonColumn } from './json-column';
 
-export type MoistureReading = { meterReading: number; woodTempC: number | null; species: string | null };
+export type MoistureReading = {
+  meterReading: number;
+  woodTempC: number | null;
+  species: string | null;
+};
 export type DecayDepth = { top: number; bottom: number; left: number; right: number };
 export type Pin = { view: string; x: number; y: number };
 
@@ -47,12 +60,33 @@ export class Finding extends Model<InferAttributes<Finding>, InferCreationAttrib
         severity: { type: DataTypes.TINYINT, allowNull: false },
         decayType: { type: DataTypes.ENUM(...DECAY_TYPES), allowNull: false, defaultValue: 'none' },
         insectEvidence: jsonColumn<string[]>('insectEvidence', []),
-        holeDiameterMm: { type: DataTypes.DECIMAL(6, 2), allowNull: true, get() { return num(this.getDataValue('holeDiameterMm')); } },
+        holeDiameterMm: {
+          type: DataTypes.DECIMAL(6, 2),
+          allowNull: true,
+          get() {
+            return num(this.getDataValue('holeDiameterMm'));
+          },
+        },
         activity: { type: DataTypes.ENUM(...ACTIVITY), allowNull: false, defaultValue: 'unknown' },
         moisture: jsonColumn<MoistureReading | null>('moisture', null, true),
-        pickTest: { type: DataTypes.ENUM(...PICK_TEST), allowNull: false, defaultValue: 'not-done' },
-        decayDepthMm: jsonColumn<DecayDepth>('decayDepthMm', { top: 0, bottom: 0, left: 0, right: 0 }),
-        affectedLengthMm: { type: DataTypes.DECIMAL(8, 1), allowNull: true, get() { return num(this.getDataValue('affectedLengthMm')); } },
+        pickTest: {
+          type: DataTypes.ENUM(...PICK_TEST),
+          allowNull: false,
+          defaultValue: 'not-done',
+        },
+        decayDepthMm: jsonColumn<DecayDepth>('decayDepthMm', {
+          top: 0,
+          bottom: 0,
+          left: 0,
+          right: 0,
+        }),
+        affectedLengthMm: {
+          type: DataTypes.DECIMAL(8, 1),
+          allowNull: true,
+          get() {
+            return num(this.getDataValue('affectedLengthMm'));
+          },
+        },
         atJointOrFitting: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         pin: jsonColumn<Pin | null>('pin', null, true),
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },

@@ -10,11 +10,33 @@ import { Vehicle } from './vehicle';
 import { VehicleAccess } from './vehicle-access';
 import { Workshop } from './workshop';
 
-export { AuditEntry, Finding, Invitation, Membership, Photo, Survey, User, Vehicle, VehicleAccess, Workshop };
+export {
+  AuditEntry,
+  Finding,
+  Invitation,
+  Membership,
+  Photo,
+  Survey,
+  User,
+  Vehicle,
+  VehicleAccess,
+  Workshop,
+};
 
 /** Define every model, then every association in one step (associations need all models). */
 export function initModels(sequelize: Sequelize) {
-  for (const m of [Workshop, User, Membership, Invitation, Vehicle, VehicleAccess, Survey, Finding, Photo, AuditEntry])
+  for (const m of [
+    Workshop,
+    User,
+    Membership,
+    Invitation,
+    Vehicle,
+    VehicleAccess,
+    Survey,
+    Finding,
+    Photo,
+    AuditEntry,
+  ])
     m.initModel(sequelize);
 
   Workshop.hasMany(Membership, { foreignKey: 'workshopId', as: 'memberships' });

@@ -1,10 +1,22 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import { ROLES, type Role } from '@/shared/roles';
 import type { User } from './user';
 import type { Workshop } from './workshop';
 
 /** Only the SHA-256 of the invitation token is stored; the token itself travels in the e-mail. */
-export class Invitation extends Model<InferAttributes<Invitation>, InferCreationAttributes<Invitation>> {
+export class Invitation extends Model<
+  InferAttributes<Invitation>,
+  InferCreationAttributes<Invitation>
+> {
   declare id: CreationOptional<string>;
   declare workshopId: ForeignKey<Workshop['id']>;
   declare invitedById: ForeignKey<User['id']> | null;

@@ -4,7 +4,11 @@ import { DataTypes, type ModelAttributeColumnOptions, type Model } from 'sequeli
  * MariaDB stores JSON as LONGTEXT and the driver may hand it back as a string; this column
  * always reads as a parsed value.
  */
-export function jsonColumn<T>(field: string, fallback: T, allowNull = false): ModelAttributeColumnOptions<Model> {
+export function jsonColumn<T>(
+  field: string,
+  fallback: T,
+  allowNull = false,
+): ModelAttributeColumnOptions<Model> {
   return {
     type: DataTypes.JSON,
     allowNull,

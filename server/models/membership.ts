@@ -1,9 +1,21 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import { ROLES, type Role } from '@/shared/roles';
 import type { User } from './user';
 import type { Workshop } from './workshop';
 
-export class Membership extends Model<InferAttributes<Membership>, InferCreationAttributes<Membership>> {
+export class Membership extends Model<
+  InferAttributes<Membership>,
+  InferCreationAttributes<Membership>
+> {
   declare id: CreationOptional<string>;
   declare workshopId: ForeignKey<Workshop['id']>;
   declare userId: ForeignKey<User['id']>;

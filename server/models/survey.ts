@@ -1,4 +1,13 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import { SURVEY_PURPOSES, type SurveyPurpose } from '@/shared/schemas/survey';
 import type { User } from './user';
 import type { Vehicle } from './vehicle';
@@ -27,8 +36,20 @@ export class Survey extends Model<InferAttributes<Survey>, InferCreationAttribut
         id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
         date: { type: DataTypes.DATEONLY, allowNull: false },
         purpose: { type: DataTypes.ENUM(...SURVEY_PURPOSES), allowNull: false },
-        airTempC: { type: DataTypes.DECIMAL(5, 1), allowNull: true, get() { return num(this.getDataValue('airTempC')); } },
-        relativeHumidity: { type: DataTypes.DECIMAL(5, 1), allowNull: true, get() { return num(this.getDataValue('relativeHumidity')); } },
+        airTempC: {
+          type: DataTypes.DECIMAL(5, 1),
+          allowNull: true,
+          get() {
+            return num(this.getDataValue('airTempC'));
+          },
+        },
+        relativeHumidity: {
+          type: DataTypes.DECIMAL(5, 1),
+          allowNull: true,
+          get() {
+            return num(this.getDataValue('relativeHumidity'));
+          },
+        },
         notAccessibleZones: jsonColumn<string[]>('notAccessibleZones', []),
         notAccessibleNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },

@@ -1,10 +1,22 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './user';
 import type { Vehicle } from './vehicle';
 import type { Workshop } from './workshop';
 
 /** Which client-role member may see which vehicle. */
-export class VehicleAccess extends Model<InferAttributes<VehicleAccess>, InferCreationAttributes<VehicleAccess>> {
+export class VehicleAccess extends Model<
+  InferAttributes<VehicleAccess>,
+  InferCreationAttributes<VehicleAccess>
+> {
   declare id: CreationOptional<string>;
   declare workshopId: ForeignKey<Workshop['id']>;
   declare vehicleId: ForeignKey<Vehicle['id']>;

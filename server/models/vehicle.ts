@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { STORAGE_PLACES, VEHICLE_STAGES, type VehicleStage } from '@/shared/schemas/vehicle';
 import type { User } from './user';
 import type { Workshop } from './workshop';
@@ -33,8 +41,16 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
         chassisNumber: { type: DataTypes.STRING(60), allowNull: false, defaultValue: '' },
         bodyNumber: { type: DataTypes.STRING(60), allowNull: false, defaultValue: '' },
         clientName: { type: DataTypes.STRING(120), allowNull: false, defaultValue: '' },
-        storage: { type: DataTypes.ENUM(...STORAGE_PLACES), allowNull: false, defaultValue: 'indoors' },
-        stage: { type: DataTypes.ENUM(...VEHICLE_STAGES), allowNull: false, defaultValue: 'intake' },
+        storage: {
+          type: DataTypes.ENUM(...STORAGE_PLACES),
+          allowNull: false,
+          defaultValue: 'indoors',
+        },
+        stage: {
+          type: DataTypes.ENUM(...VEHICLE_STAGES),
+          allowNull: false,
+          defaultValue: 'intake',
+        },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,

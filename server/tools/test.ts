@@ -50,8 +50,41 @@ function runJest(args: string[], env: NodeJS.ProcessEnv): Promise<number> {
   });
 }
 
+/** Type check and lint, on a full run only (a targeted `npm test -- <file>` skips them). */
+function runStaticChecks(): Promise<number> {
+  const steps: [string, string[]][] = [
+    [
+      'Type check (tsc --noEmit)',
+      [path.join(REPO_ROOT, 'node_modules', 'typescript', 'bin', 'tsc'), '--noEmit'],
+    ],
+    ['Lint (eslint .)', [path.join(REPO_ROOT, 'node_modules', 'eslint', 'bin', 'eslint.js'), '.']],
+    [
+      'Format (prettier --check .)',
+      [
+        path.join(REPO_ROOT, 'node_modules', 'prettier', 'bin', 'prettier.cjs'),
+        '--check',
+        '--log-level=warn',
+        '.',
+      ],
+    ],
+  ];
+  return steps.reduce<Promise<number>>(async (previous, [title, argv]) => {
+    const failed = await previous;
+    console.log(`${title}…`);
+    const code = await new Promise<number>((resolve, reject) => {
+      const child = spawn(process.execPath, argv, { cwd: REPO_ROOT, stdio: 'inherit' });
+      child.on('error', reject);
+      child.on('exit', (c) => resolve(c ?? 1));
+    });
+    if (code !== 0) console.log(`${title} failed.`);
+    return failed || code;
+  }, Promise.resolve(0));
+}
+
 async function main(): Promise<number> {
   const args = process.argv.slice(2);
+  const staticCode = args.length === 0 ? await runStaticChecks() : 0;
+  checkInterrupted();
   await ensureAptPackages(['mariadb-server', 'chromium', 'poppler-utils']);
   if (!findMariadbBinaries())
     throw new ToolError('mariadb-server is installed but its programs are missing.');
@@ -101,7 +134,7 @@ async function main(): Promise<number> {
     if (!wantsOwnJson && fs.existsSync(resultsFile)) {
       console.log(summaryLine(JSON.parse(fs.readFileSync(resultsFile, 'utf8')) as JestSummary));
     }
-    return interrupted ? 130 : code;
+    return interrupted ? 130 : code || staticCode;
   } finally {
     if (db) {
       await db.stop();

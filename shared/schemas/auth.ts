@@ -7,7 +7,10 @@ export const passwordSchema = z
   .string()
   .min(8, 'Use at least 8 characters')
   .max(128, 'Use at most 128 characters');
-export const emailSchema = z.email('Enter a valid e-mail address').max(254).transform((s) => s.toLowerCase());
+export const emailSchema = z
+  .email('Enter a valid e-mail address')
+  .max(254)
+  .transform((s) => s.toLowerCase());
 export const personNameSchema = z.string().trim().min(1, 'Enter a name').max(120);
 
 export const signUpRequest = z.object({

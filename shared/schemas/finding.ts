@@ -5,10 +5,22 @@ export const SEVERITIES = [0, 1, 2, 3, 4] as const;
 /** Plain description of each decay-severity level, shown beside the picker and in the legend. */
 export const SEVERITY_LABELS: Record<number, { title: string; description: string }> = {
   0: { title: 'Sound', description: 'No decay or insect damage found; the awl does not sink in.' },
-  1: { title: 'Surface', description: 'Staining or softening only at the surface; the section is intact.' },
-  2: { title: 'Shallow', description: 'Decay or galleries a few millimetres deep; most of the section is sound.' },
-  3: { title: 'Deep', description: 'Decay reaches well into the section or along a joint; strength is reduced.' },
-  4: { title: 'Lost', description: 'Wood crumbles, is hollow or broken; the member no longer carries load.' },
+  1: {
+    title: 'Surface',
+    description: 'Staining or softening only at the surface; the section is intact.',
+  },
+  2: {
+    title: 'Shallow',
+    description: 'Decay or galleries a few millimetres deep; most of the section is sound.',
+  },
+  3: {
+    title: 'Deep',
+    description: 'Decay reaches well into the section or along a joint; strength is reduced.',
+  },
+  4: {
+    title: 'Lost',
+    description: 'Wood crumbles, is hollow or broken; the member no longer carries load.',
+  },
 };
 
 export const DECAY_TYPES = ['none', 'brown-rot', 'white-rot', 'soft-rot', 'unknown'] as const;
@@ -121,10 +133,19 @@ export const findingResponse = z.object({
   holeDiameterMm: z.number().nullable(),
   activity: z.enum(ACTIVITY),
   moisture: z
-    .object({ meterReading: z.number(), woodTempC: z.number().nullable(), species: z.string().nullable() })
+    .object({
+      meterReading: z.number(),
+      woodTempC: z.number().nullable(),
+      species: z.string().nullable(),
+    })
     .nullable(),
   pickTest: z.enum(PICK_TEST),
-  decayDepthMm: z.object({ top: z.number(), bottom: z.number(), left: z.number(), right: z.number() }),
+  decayDepthMm: z.object({
+    top: z.number(),
+    bottom: z.number(),
+    left: z.number(),
+    right: z.number(),
+  }),
   affectedLengthMm: z.number().nullable(),
   atJointOrFitting: z.boolean(),
   pin: z.object({ view: z.string(), x: z.number(), y: z.number() }).nullable(),

@@ -11,7 +11,11 @@ const optionalText = (max: number) => z.string().trim().max(max).default('');
 /** POST /api/workshops/:wid/vehicles — `id` may be sent by the client so a retry is idempotent. */
 export const createVehicleRequest = z.object({
   id: uuid.optional(),
-  year: z.number().int().min(1885, 'Year looks too early').max(currentYear + 1, 'Year is in the future'),
+  year: z
+    .number()
+    .int()
+    .min(1885, 'Year looks too early')
+    .max(currentYear + 1, 'Year is in the future'),
   make: z.string().trim().min(1, 'Enter the make').max(80),
   model: z.string().trim().min(1, 'Enter the model').max(80),
   bodyPlanKey: z.string().min(1, 'Choose a body plan').max(60),

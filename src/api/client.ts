@@ -49,7 +49,11 @@ export async function request<T>(
       signal: options.signal,
     });
   } catch {
-    throw new ApiRequestError(0, 'network', 'Cannot reach the Soundframe server. Check your connection and try again.');
+    throw new ApiRequestError(
+      0,
+      'network',
+      'Cannot reach the Soundframe server. Check your connection and try again.',
+    );
   }
   if (res.status === 204) return undefined as T;
   const text = await res.text();
@@ -60,7 +64,11 @@ export async function request<T>(
       const e = parsed.data.error;
       throw new ApiRequestError(res.status, e.code, e.message, e.fields);
     }
-    throw new ApiRequestError(res.status, 'http_' + res.status, `The server answered ${res.status}.`);
+    throw new ApiRequestError(
+      res.status,
+      'http_' + res.status,
+      `The server answered ${res.status}.`,
+    );
   }
   return options.schema ? options.schema.parse(json) : (json as T);
 }

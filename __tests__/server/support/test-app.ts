@@ -24,13 +24,22 @@ export function testConfig(overrides: Record<string, string> = {}): Config {
   });
 }
 
-export type TestApp = { app: ReturnType<typeof createApp>; config: Config; sequelize: Sequelize; close(): Promise<void> };
+export type TestApp = {
+  app: ReturnType<typeof createApp>;
+  config: Config;
+  sequelize: Sequelize;
+  close(): Promise<void>;
+};
 
 export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
   const config = testConfig(overrides);
   const sequelize = createSequelize(config);
   const storage = createStorage(config.storage);
-  const mailer = createMailer({ host: config.mail.host, port: config.mail.port, from: config.mail.from });
+  const mailer = createMailer({
+    host: config.mail.host,
+    port: config.mail.port,
+    from: config.mail.from,
+  });
   const app = createApp({ config, storage, mailer });
   return {
     app,
@@ -39,7 +48,8 @@ export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
     async close() {
       mailer.close();
       await sequelize.close();
-      if (config.storage.driver === 'local') fs.rmSync(config.storage.dir, { recursive: true, force: true });
+      if (config.storage.driver === 'local')
+        fs.rmSync(config.storage.dir, { recursive: true, force: true });
     },
   };
 }
