@@ -27,6 +27,7 @@ async function signIn(page: Page, role: string) {
 }
 
 async function openVehicle(page: Page, text: string) {
+  await page.locator('[data-testid^="vehicle-row-"]').first().waitFor();
   await page.locator('[data-testid^="vehicle-row-"]', { hasText: text }).first().click();
   await page.getByTestId('vehicle-overview').waitFor();
   await page.getByTestId('body-diagram').waitFor();
@@ -171,6 +172,7 @@ describe('client (read only)', () => {
     const page = await browser.newPage({ width: 390, height: 844 });
     await signIn(page, 'client');
     const rows = page.locator('[data-testid^="vehicle-row-"]');
+    await rows.first().waitFor();
     expect(await rows.count()).toBe(1);
     await screenshot(page, 'client-01-vehicles');
 

@@ -1,12 +1,9 @@
-import { Link } from 'expo-router';
 import { useState } from 'react';
-import { StyleSheet, View } from 'react-native';
 import { signInRequest } from '@/shared/schemas';
 import { ApiRequestError } from '@/src/api/client';
-import { AuthFrame } from '@/src/components/nav/auth-frame';
-import { AppText, Button, FormMessage, TextField, useFormSubmit } from '@/src/components/ui';
+import { AuthFrame, AuthSwitch } from '@/src/components/nav/auth-frame';
+import { Button, EmailField, FormMessage, TextField, useFormSubmit } from '@/src/components/ui';
 import { useSession } from '@/src/hooks/use-session';
-import { colors, fonts, spacing } from '@/src/theme';
 
 export default function SignIn() {
   const session = useSession();
@@ -23,24 +20,19 @@ export default function SignIn() {
     <AuthFrame
       title="Sign in"
       footer={
-        <View style={styles.footer}>
-          <AppText muted>Running a workshop and new here?</AppText>
-          <Link href="/sign-up" style={styles.link} testID="to-sign-up">
-            Create a workshop
-          </Link>
-        </View>
+        <AuthSwitch
+          prompt="Running a workshop and new here?"
+          href="/sign-up"
+          label="Create a workshop"
+          testID="to-sign-up"
+        />
       }
     >
       <FormMessage message={form.message} />
-      <TextField
-        label="E-mail"
+      <EmailField
         value={email}
         onChangeText={setEmail}
         error={form.errors.email}
-        autoCapitalize="none"
-        autoComplete="email"
-        keyboardType="email-address"
-        inputMode="email"
         testID="sign-in-email"
       />
       <TextField
@@ -57,14 +49,3 @@ export default function SignIn() {
     </AuthFrame>
   );
 }
-
-const styles = StyleSheet.create({
-  footer: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'center' },
-  link: {
-    color: colors.accent,
-    textDecorationLine: 'underline',
-    fontFamily: fonts.bold,
-    fontSize: 16,
-    paddingVertical: spacing.md,
-  },
-});

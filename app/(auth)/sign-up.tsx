@@ -1,11 +1,8 @@
-import { Link } from 'expo-router';
 import { useState } from 'react';
-import { StyleSheet, View } from 'react-native';
 import { signUpRequest } from '@/shared/schemas';
-import { AuthFrame } from '@/src/components/nav/auth-frame';
-import { AppText, Button, FormMessage, TextField, useFormSubmit } from '@/src/components/ui';
+import { AuthFrame, AuthSwitch } from '@/src/components/nav/auth-frame';
+import { Button, EmailField, FormMessage, TextField, useFormSubmit } from '@/src/components/ui';
 import { useSession } from '@/src/hooks/use-session';
-import { colors, fonts, spacing } from '@/src/theme';
 
 export default function SignUp() {
   const session = useSession();
@@ -20,14 +17,7 @@ export default function SignUp() {
     <AuthFrame
       title="Create a workshop"
       intro="You become its owner and can invite inspectors, applicators and clients afterwards."
-      footer={
-        <View style={styles.footer}>
-          <AppText muted>Already have an account?</AppText>
-          <Link href="/sign-in" style={styles.link}>
-            Sign in
-          </Link>
-        </View>
-      }
+      footer={<AuthSwitch prompt="Already have an account?" href="/sign-in" label="Sign in" />}
     >
       <FormMessage message={form.message} />
       <TextField
@@ -46,15 +36,10 @@ export default function SignUp() {
         autoComplete="name"
         testID="sign-up-name"
       />
-      <TextField
-        label="E-mail"
+      <EmailField
         value={email}
         onChangeText={setEmail}
         error={form.errors.email}
-        autoCapitalize="none"
-        autoComplete="email"
-        keyboardType="email-address"
-        inputMode="email"
         testID="sign-up-email"
       />
       <TextField
@@ -77,14 +62,3 @@ export default function SignUp() {
     </AuthFrame>
   );
 }
-
-const styles = StyleSheet.create({
-  footer: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'center' },
-  link: {
-    color: colors.accent,
-    textDecorationLine: 'underline',
-    fontFamily: fonts.bold,
-    fontSize: 16,
-    paddingVertical: spacing.md,
-  },
-});

@@ -7,9 +7,9 @@ import {
   AppText,
   Button,
   Card,
+  EmailField,
   FormMessage,
   Select,
-  TextField,
   useFormSubmit,
   useToast,
 } from '@/src/components/ui';
@@ -35,14 +35,10 @@ export function InviteForm({ workshopId }: { workshopId: string }) {
       </AppText>
       <View style={styles.fields}>
         <FormMessage message={form.message} />
-        <TextField
-          label="E-mail"
+        <EmailField
           value={email}
           onChangeText={setEmail}
           error={form.errors.email}
-          autoCapitalize="none"
-          keyboardType="email-address"
-          inputMode="email"
           testID="invite-email"
         />
         <Select

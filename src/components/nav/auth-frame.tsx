@@ -1,8 +1,9 @@
 import type { ReactNode } from 'react';
+import { Link, type Href } from 'expo-router';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { AppText } from '@/src/components/ui';
-import { colors, radius, spacing } from '@/src/theme';
+import { colors, fonts, radius, spacing } from '@/src/theme';
 
 /** The signed-out frame: the product's name, one card with the form, and a footer line. */
 export function AuthFrame({
@@ -49,7 +50,37 @@ export function AuthFrame({
   );
 }
 
+/** The line under the card that switches between signing in and creating a workshop. */
+export function AuthSwitch({
+  prompt,
+  href,
+  label,
+  testID,
+}: {
+  prompt: string;
+  href: Href;
+  label: string;
+  testID?: string;
+}) {
+  return (
+    <View style={styles.footer}>
+      <AppText muted>{prompt}</AppText>
+      <Link href={href} style={styles.link} testID={testID}>
+        {label}
+      </Link>
+    </View>
+  );
+}
+
 const styles = StyleSheet.create({
+  footer: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'center' },
+  link: {
+    color: colors.accent,
+    textDecorationLine: 'underline',
+    fontFamily: fonts.bold,
+    fontSize: 16,
+    paddingVertical: spacing.md,
+  },
   page: { flex: 1, backgroundColor: colors.paper },
   content: { flexGrow: 1, alignItems: 'center', paddingHorizontal: spacing.lg },
   column: { width: '100%', maxWidth: 440, gap: spacing.md },

@@ -7,7 +7,7 @@ export { ConfirmDialog } from './confirm-dialog';
 export { installFocusStyle } from './focus-style';
 export { Screen } from './screen';
 export { EmptyState, ErrorView, LoadingView } from './states';
-export { TextField } from './text-field';
+export { EmailField, TextField } from './text-field';
 export { ToastProvider, useToast, type ToastKind, type ToastOptions } from './toast';
 export { serverFieldErrors, zodFieldErrors, type FieldErrors } from './form-errors';
 export { FieldErrorsNotice, FormMessage } from './form-message';

@@ -12,6 +12,20 @@ type Props = Omit<TextInputProps, 'style' | 'placeholderTextColor'> & {
 };
 
 /** A labelled input; the error sits right under the label so it is read with the field. */
+/** An e-mail address field: no auto-capitalising, the e-mail keyboard. */
+export function EmailField(props: Omit<Props, 'label'> & { label?: string }) {
+  return (
+    <TextField
+      label="E-mail"
+      autoCapitalize="none"
+      autoComplete="email"
+      keyboardType="email-address"
+      inputMode="email"
+      {...props}
+    />
+  );
+}
+
 export function TextField({ label, error, hint, suffix, multiline, testID, ...input }: Props) {
   const [focused, setFocused] = useState(false);
   return (
