@@ -4,3 +4,4 @@ export * from './workshop';
 export * from './vehicle';
 export * from './survey';
 export * from './finding';
+export * from './decision';

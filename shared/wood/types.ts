@@ -1,0 +1,148 @@
+/**
+ * Types of the wood-science API (shared/wood/index.ts exports the functions). Units are
+ * millimetres, °C and percent unless a name says inches.
+ */
+import type { StructuralClass, SpeciesKey } from '../body-plans/schema';
+
+export type DecayFaces = { top?: number; bottom?: number; left?: number; right?: number };
+
+export interface ResidualSectionInput {
+  /** Finished width of the member (across the face you see), mm. */
+  width: number;
+  /** Finished depth (into the body; bending is about the axis parallel to the width), mm. */
+  depth: number;
+  /** Depth of decayed wood measured in from each face, mm. */
+  decay: DecayFaces;
+}
+
+export interface ResidualSection {
+  width: number;
+  depth: number;
+  area: number;
+  sectionModulus: number;
+  momentOfInertia: number;
+  areaRatio: number;
+  sectionModulusRatio: number;
+  momentOfInertiaRatio: number;
+}
+
+export type DecayRiskLevel = 'dry' | 'elevated' | 'decay-possible' | 'saturated';
+export interface DecayRisk {
+  level: DecayRiskLevel;
+  reason: string;
+}
+
+export const AGENT_KEYS = [
+  'brown-rot-fungi',
+  'white-rot-fungi',
+  'soft-rot-fungi',
+  'drywood-termites',
+  'subterranean-termites',
+  'lyctid-beetles',
+  'anobiid-beetles',
+  'bostrichid-beetles',
+  'old-house-borer',
+  'carpenter-ants',
+] as const;
+export type AgentKey = (typeof AGENT_KEYS)[number];
+
+/** What was seen; every field optional (unknown). */
+export interface AgentEvidence {
+  holeDiameterMm?: number | null;
+  holeShape?: 'round' | 'oval' | null;
+  /** powder = flour/talc-like; pellets = hard, elongate, ridged; fibrous = coarse shavings with insect parts; packed = tightly packed meal. */
+  frass?: 'powder' | 'pellets' | 'fibrous' | 'packed' | null;
+  mudTubes?: boolean;
+  galleries?: boolean;
+  liveInsects?: boolean;
+  wings?: boolean;
+  woodType?: 'hardwood' | 'softwood' | null;
+  moisturePercent?: number | null;
+  decayType?: 'brown-rot' | 'white-rot' | 'soft-rot' | 'none' | 'unknown' | null;
+}
+
+export interface AgentCandidate {
+  agent: AgentKey;
+  label: string;
+  /** Relative strength of the match, 0–1 (not a probability). */
+  score: number;
+  /** The evidence that matched, in plain words, each with its source. */
+  reasons: string[];
+}
+
+export const VERDICT_OPTIONS = [
+  'keep',
+  'consolidate',
+  'splice',
+  'replace-member',
+  'replace-assembly',
+] as const;
+export type VerdictOption = (typeof VERDICT_OPTIONS)[number];
+
+export const DECISION_CLASSES = ['structural-must-fix', 'cosmetic', 'monitor'] as const;
+export type DecisionClass = (typeof DECISION_CLASSES)[number];
+
+/** Workshop-configurable thresholds: common practice defaults, not published rules. */
+export interface VerdictRules {
+  /** Keep the member when at least this share of its section modulus remains (0–1). */
+  keepMinSectionModulusRatio: number;
+  /** Consolidate (harden, fill) when at least this much remains and the damage is local. */
+  consolidateMinSectionModulusRatio: number;
+  /** Splice in new wood when the affected length is at most this share of the member length (0–1). */
+  spliceMaxAffectedLengthRatio: number;
+  /** Damage at a joint or fitting (hinge, lock, belt or seat mounting) on a structural member → no consolidation. */
+  jointDamageRulesOutConsolidation: boolean;
+  /** Replace the whole assembly when at least this many of its members need replacement. */
+  replaceAssemblyMinMembers: number;
+}
+
+export interface VerdictInput {
+  structuralClass: StructuralClass;
+  /** From residualSection; 1 when no decay was measured. */
+  sectionModulusRatio: number;
+  areaRatio: number;
+  affectedLengthMm: number;
+  memberLengthMm: number;
+  atJointOrFitting: boolean;
+  /** Worst open severity 0–4 in the zone. */
+  severity: number;
+  /** Active insects or active decay still present (treat before repair). */
+  activeAgent: boolean;
+  /** How many other members of the same assembly already need replacing (0 when unknown). */
+  assemblyMembersNeedingReplacement: number;
+}
+
+export interface Verdict {
+  option: VerdictOption;
+  decisionClass: DecisionClass;
+  reasons: string[];
+}
+
+export interface CutListLine {
+  species: SpeciesKey;
+  finishedThicknessMm: number;
+  finishedWidthMm: number;
+  finishedLengthMm: number;
+  /** Rough thickness in quarters of an inch (4 = 4/4). */
+  roughQuarters: number;
+  boardFeet: number;
+  boardFeetWithWaste: number;
+  cost: number;
+}
+
+export interface SpliceGeometry {
+  /** Slope as 1:N. */
+  slope: number;
+  scarfLengthMm: number;
+  /** Two splices, or a splice and a reinforcing plate, no closer than this (FAA AC 43.13-1B §1-40). */
+  minSpacingMm: number;
+}
+
+export interface RepairEstimate {
+  hours: number;
+  labourCost: number;
+  materialCost: number;
+  totalCost: number;
+  cutList: CutListLine[];
+  splice: SpliceGeometry | null;
+}
