@@ -46,12 +46,16 @@ export const AGENT_KEYS = [
 ] as const;
 export type AgentKey = (typeof AGENT_KEYS)[number];
 
+/** powder = flour/talc-like; pellets = hard, elongate, ridged; fibrous = coarse shavings with insect parts; packed = tightly packed meal. */
+export type Frass = 'powder' | 'pellets' | 'fibrous' | 'packed';
+
 /** What was seen; every field optional (unknown). */
 export interface AgentEvidence {
   holeDiameterMm?: number | null;
   holeShape?: 'round' | 'oval' | null;
-  /** powder = flour/talc-like; pellets = hard, elongate, ridged; fibrous = coarse shavings with insect parts; packed = tightly packed meal. */
-  frass?: 'powder' | 'pellets' | 'fibrous' | 'packed' | null;
+  frass?: Frass | null;
+  /** Every kind of frass seen, when more than one (anobiid frass is fine powder with pellets); joined with `frass`. */
+  frassKinds?: Frass[];
   mudTubes?: boolean;
   galleries?: boolean;
   liveInsects?: boolean;
@@ -110,6 +114,12 @@ export interface VerdictInput {
   activeAgent: boolean;
   /** How many other members of the same assembly already need replacing (0 when unknown). */
   assemblyMembersNeedingReplacement: number;
+  /**
+   * Scarf length at the workshop's slope (spliceGeometry), mm. When given, a splice whose new
+   * wood (affected length + a scarf at each end) would be longer than the member becomes a
+   * replacement.
+   */
+  scarfLengthMm?: number | null;
 }
 
 export interface Verdict {
@@ -145,4 +155,6 @@ export interface RepairEstimate {
   totalCost: number;
   cutList: CutListLine[];
   splice: SpliceGeometry | null;
+  /** How the estimate was figured and anything to watch (plain sentences). */
+  notes?: string[];
 }
