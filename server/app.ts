@@ -10,6 +10,7 @@ import { authenticate, requireAuth } from './middleware/auth';
 import { errorHandler } from './middleware/error-handler';
 import { loadMembership } from './middleware/workshop';
 import { authRoutes } from './routes/auth';
+import { decisionRoutes } from './routes/decisions';
 import { devRoutes } from './routes/dev';
 import { findingRoutes } from './routes/findings';
 import { invitationPublicRoutes } from './routes/invitations';
@@ -65,6 +66,7 @@ export function createApp(deps: AppDeps) {
   scoped.use(surveyRoutes());
   scoped.use(findingRoutes());
   scoped.use(photoRoutes());
+  scoped.use(decisionRoutes());
   api.use('/workshops/:workshopId', scoped);
 
   api.use((_req, _res, next) => next(notFound('API route')));

@@ -18,6 +18,7 @@ export const ACTIONS = [
   'surveys.write',
   'findings.write',
   'photos.write',
+  'decisions.write',
 ] as const;
 export type Action = (typeof ACTIONS)[number];
 
@@ -30,6 +31,7 @@ const INSPECTOR: Action[] = [
   'surveys.write',
   'findings.write',
   'photos.write',
+  'decisions.write',
 ];
 
 export const PERMISSIONS: Record<Role, readonly Action[]> = {

@@ -19,6 +19,7 @@ import {
   TEST_PASSWORD,
   unique,
 } from '../factories';
+import { buildSaveDecision, createDecision } from '../factories/decisions';
 import { createInvitation } from '../factories/invitations';
 import { appStorage, createPhoto, jpeg } from '../factories/photos';
 import { buildTestApp, type TestApp } from './support/test-app';
@@ -413,6 +414,63 @@ const ROUTES: Row[] = [
     ok: 204,
     build: (f) => ({ url: `${f.w}/photos/${f.photo.id}` }),
   },
+
+  // Member decisions
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/decisions',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await createDecision(f.vehicle);
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/decisions` };
+    },
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/decisions/:zoneKey',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await createDecision(f.vehicle, { zoneKey: 'sill-right' });
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/decisions/sill-right` };
+    },
+  },
+  {
+    route: 'PUT /api/workshops/:wid/vehicles/:vid/decisions/:zoneKey',
+    needs: 'decisions.write',
+    vehicle: true,
+    ok: 201,
+    build: (f) => ({
+      url: `${f.w}/vehicles/${f.vehicle.id}/decisions/sill-right`,
+      // The reason is only kept if the server's recommendation differs from "keep".
+      body: buildSaveDecision({ overrideReason: 'Role matrix' }),
+    }),
+  },
+  {
+    route: 'PUT /api/workshops/:wid/vehicles/:vid/decisions/:zoneKey',
+    label: '(update)',
+    needs: 'decisions.write',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await createDecision(f.vehicle, { zoneKey: 'sill-right' });
+      return {
+        url: `${f.w}/vehicles/${f.vehicle.id}/decisions/sill-right`,
+        body: buildSaveDecision({ version: 0, notes: 'Edited', overrideReason: 'Role matrix' }),
+      };
+    },
+  },
+  {
+    route: 'DELETE /api/workshops/:wid/vehicles/:vid/decisions/:zoneKey',
+    needs: 'decisions.write',
+    vehicle: true,
+    ok: 204,
+    build: async (f) => {
+      await createDecision(f.vehicle, { zoneKey: 'sill-right' });
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/decisions/sill-right` };
+    },
+  },
 ];
 
 const ACTORS: ActorName[] = [
@@ -460,7 +518,8 @@ describe.each(ROUTES.map((r) => [`${r.route}${r.label ? ` ${r.label}` : ''}`, r]
     it.each(ACTORS)('as %s', async (name) => {
       const a = actor(name);
       const req = await row.build({ ...(await freshRecords()), actor: a });
-      const method = row.route.split(' ')[0].toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
+      const method = row.route.split(' ')[0].toLowerCase() as
+        'get' | 'post' | 'put' | 'patch' | 'delete';
       let call = request(t.app)[method](req.url);
       if (a.member) call = call.set(a.member.auth);
       if (req.photo) call = call.attach('photos', await jpeg(), 'sill.jpg');

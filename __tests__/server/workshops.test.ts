@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { AuditEntry, Workshop } from '@/server/models';
 import { workshopResponse } from '@/shared/schemas/workshop';
+import { DEFAULT_WOOD_SETTINGS } from '@/shared/wood';
 import { createWorkshop, createWorkshopWithTeam, unique } from '../factories';
 import { buildTestApp, type TestApp } from './support/test-app';
 
@@ -22,7 +23,13 @@ describe('GET /api/workshops/:wid', () => {
       expect(workshopResponse.parse(res.body)).toEqual({
         id: team.workshop.id,
         name: team.workshop.name,
-        settings: { units: 'metric', region: '', labourRatePerHour: 0, currency: 'EUR' },
+        settings: {
+          units: 'metric',
+          region: '',
+          labourRatePerHour: 0,
+          currency: 'EUR',
+          wood: DEFAULT_WOOD_SETTINGS,
+        },
         role,
       });
     },
@@ -54,6 +61,7 @@ describe('PATCH /api/workshops/:wid', () => {
       region: 'Coastal, damp winters',
       labourRatePerHour: 65,
       currency: 'EUR',
+      wood: DEFAULT_WOOD_SETTINGS,
     });
 
     const name = unique('Renamed Coachworks');
@@ -80,6 +88,7 @@ describe('PATCH /api/workshops/:wid', () => {
       region: 'Coastal, damp winters',
       labourRatePerHour: 65,
       currency: 'EUR',
+      wood: DEFAULT_WOOD_SETTINGS,
     });
     const entries = await AuditEntry.findAll({
       where: { workshopId: workshop.id, action: 'workshop.update' },

@@ -6,6 +6,7 @@ import {
 } from 'sequelize';
 import { ZodError } from 'zod';
 import { ERROR_CODES } from '@/shared/schemas/common';
+import { DomainError } from '@/shared/wood/errors';
 import { AppError } from '../errors';
 
 type Body = { error: { code: string; message: string; fields?: Record<string, string> } };
@@ -25,6 +26,18 @@ function toResponse(err: unknown): { status: number; body: Body } {
     return {
       status: err.status,
       body: { error: { code: err.code, message: err.message, fields: err.fields } },
+    };
+  // A wood-science function refused its input: the caller's data, not a fault on our side.
+  if (err instanceof DomainError)
+    return {
+      status: 400,
+      body: {
+        error: {
+          code: ERROR_CODES.validation,
+          message: err.message,
+          fields: { [err.field]: err.message },
+        },
+      },
     };
   if (err instanceof ZodError) {
     const fields = zodFields(err);

@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize';
 import { AuditEntry } from './audit-entry';
 import { Finding } from './finding';
 import { Invitation } from './invitation';
+import { MemberDecision } from './member-decision';
 import { Membership } from './membership';
 import { Photo } from './photo';
 import { Survey } from './survey';
@@ -14,6 +15,7 @@ export {
   AuditEntry,
   Finding,
   Invitation,
+  MemberDecision,
   Membership,
   Photo,
   Survey,
@@ -35,6 +37,7 @@ export function initModels(sequelize: Sequelize) {
     Survey,
     Finding,
     Photo,
+    MemberDecision,
     AuditEntry,
   ])
     m.initModel(sequelize);
@@ -72,6 +75,11 @@ export function initModels(sequelize: Sequelize) {
   Photo.belongsTo(Finding, { foreignKey: 'findingId', as: 'finding' });
   Photo.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
   Photo.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+
+  Vehicle.hasMany(MemberDecision, { foreignKey: 'vehicleId', as: 'decisions' });
+  MemberDecision.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  MemberDecision.belongsTo(User, { foreignKey: 'decidedById', as: 'decidedBy' });
+  MemberDecision.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
 
   AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   AuditEntry.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });

@@ -1,25 +1,45 @@
 import type { Transaction } from 'sequelize';
 import type { z } from 'zod';
 import {
+  mergeWoodSettings,
   workshopSettings,
   type updateWorkshopRequest,
   type WorkshopResponse,
+  type WorkshopSettings,
 } from '@/shared/schemas/workshop';
-import { notFound } from '../errors';
+import { DEFAULT_WOOD_SETTINGS } from '@/shared/wood/settings';
+import { badRequest, notFound } from '../errors';
+import { zodFields } from '../middleware/error-handler';
 import type { MemberContext } from '../middleware/workshop';
 import { Workshop } from '../models';
 import { audit, diff } from './audit';
 
 type UpdateWorkshop = z.infer<typeof updateWorkshopRequest>;
 
-function toResponse(w: Workshop, member: MemberContext): WorkshopResponse {
-  // Settings saved before a field existed read back with that field's default.
+/**
+ * The full settings of a workshop. Settings saved before a field existed read back with that
+ * field's default, down to single keys inside `wood`.
+ */
+export function readSettings(stored: Partial<WorkshopSettings> | null | undefined) {
+  const saved = stored ?? {};
+  return workshopSettings.parse({
+    ...saved,
+    wood: mergeWoodSettings(DEFAULT_WOOD_SETTINGS, saved.wood),
+  });
+}
+
+/** Flat keys for the audit diff, one per wood group, so an entry names what changed. */
+function auditView(name: string, s: WorkshopSettings): Record<string, unknown> {
+  const { wood, ...flat } = s;
   return {
-    id: w.id,
-    name: w.name,
-    settings: workshopSettings.parse(w.settings ?? {}),
-    role: member.role,
+    name,
+    ...flat,
+    ...Object.fromEntries(Object.entries(wood).map(([k, v]) => [`wood.${k}`, v])),
   };
+}
+
+function toResponse(w: Workshop, member: MemberContext): WorkshopResponse {
+  return { id: w.id, name: w.name, settings: readSettings(w.settings), role: member.role };
 }
 
 export async function getWorkshop(member: MemberContext): Promise<WorkshopResponse> {
@@ -28,7 +48,10 @@ export async function getWorkshop(member: MemberContext): Promise<WorkshopRespon
   return toResponse(w, member);
 }
 
-/** Renames the workshop and/or merges the given settings into the saved ones. */
+/**
+ * Renames the workshop and/or merges the given settings into the saved ones; `wood` is merged
+ * key by key at every depth, then the whole is validated.
+ */
 export async function updateWorkshop(
   member: MemberContext,
   body: UpdateWorkshop,
@@ -40,13 +63,25 @@ export async function updateWorkshop(
       transaction,
     });
     if (!w) throw notFound('Workshop');
-    const current = workshopSettings.parse(w.settings ?? {});
-    const settings = workshopSettings.parse({ ...current, ...body.settings });
-    const before = { name: w.name, ...current };
-    const after = { name: body.name ?? w.name, ...settings };
-    const changes = diff(before, after, ['name', ...Object.keys(workshopSettings.shape)]);
+    const current = readSettings(w.settings);
+    const { wood: woodPatch, ...flat } = body.settings ?? {};
+    const parsed = workshopSettings.safeParse({
+      ...current,
+      ...flat,
+      wood: mergeWoodSettings(current.wood, woodPatch),
+    });
+    if (!parsed.success)
+      throw badRequest(
+        Object.fromEntries(
+          Object.entries(zodFields(parsed.error)).map(([k, v]) => [`settings.${k}`, v]),
+        ),
+      );
+    const settings = parsed.data;
+    const before = auditView(w.name, current);
+    const after = auditView(body.name ?? w.name, settings);
+    const changes = diff(before, after, Object.keys(after));
     if (Object.keys(changes).length === 0) return toResponse(w, member);
-    w.name = after.name;
+    w.name = body.name ?? w.name;
     w.settings = settings;
     await w.save({ transaction });
     await audit(transaction, {

@@ -1,5 +1,11 @@
 import { z } from 'zod';
 import { ROLES } from '../roles';
+import {
+  DEFAULT_WOOD_SETTINGS,
+  verdictRulesSchema,
+  woodSettingsSchema,
+  type WoodSettings,
+} from '../wood/settings';
 import { emailSchema } from './auth';
 import { isoDateTime, uuid } from './common';
 
@@ -17,8 +23,46 @@ export const workshopSettings = z.object({
   region: settingsFields.region.default(''),
   labourRatePerHour: settingsFields.labourRatePerHour.default(0),
   currency: settingsFields.currency.default('EUR'),
+  wood: woodSettingsSchema.default(() => structuredClone(DEFAULT_WOOD_SETTINGS)),
 });
 export type WorkshopSettings = z.infer<typeof workshopSettings>;
+
+const wood = woodSettingsSchema.shape;
+
+/**
+ * A PATCH of the wood settings: any subset at any depth. The server merges it over the saved
+ * value and validates the whole (so cross-field rules such as consolidate ≤ keep still hold).
+ * Built from the shapes because zod refuses `.partial()` on a refined object.
+ */
+export const woodSettingsPatch = z
+  .object({
+    verdictRules: z.object(verdictRulesSchema.shape).partial(),
+    scarfSlope: wood.scarfSlope,
+    hoursPerOperation: wood.hoursPerOperation.partial(),
+    timberPricePerBoardFoot: wood.timberPricePerBoardFoot.partial(),
+    wasteFactorPercent: wood.wasteFactorPercent,
+  })
+  .partial();
+export type WoodSettingsPatch = z.infer<typeof woodSettingsPatch>;
+
+const isPlainObject = (v: unknown): v is Record<string, unknown> =>
+  typeof v === 'object' && v !== null && !Array.isArray(v);
+
+function deepMerge(base: unknown, patch: unknown): unknown {
+  if (patch === undefined) return base;
+  if (!isPlainObject(base) || !isPlainObject(patch)) return patch;
+  const out: Record<string, unknown> = { ...base };
+  for (const [k, v] of Object.entries(patch)) out[k] = deepMerge(base[k], v);
+  return out;
+}
+
+/**
+ * Wood settings with `patch` laid over `base` key by key (not validated: parse the result with
+ * woodSettingsSchema). Also fills a saved value from before a key existed with its default.
+ */
+export function mergeWoodSettings(base: WoodSettings, patch: unknown): unknown {
+  return deepMerge(base, patch);
+}
 
 export const workshopResponse = z.object({
   id: uuid,
@@ -31,7 +75,10 @@ export type WorkshopResponse = z.infer<typeof workshopResponse>;
 export const updateWorkshopRequest = z.object({
   name: z.string().trim().min(2).max(120).optional(),
   // No defaults here: a key left out keeps its saved value (defaults would overwrite it).
-  settings: z.object(settingsFields).partial().optional(),
+  settings: z
+    .object({ ...settingsFields, wood: woodSettingsPatch })
+    .partial()
+    .optional(),
 });
 
 export const memberResponse = z.object({
