@@ -26,6 +26,7 @@ const TABLES = [
   'surveys',
   'findings',
   'photos',
+  'member_decisions',
   'audit_entries',
   'memberships',
 ];

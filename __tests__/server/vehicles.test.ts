@@ -12,6 +12,7 @@ import {
   unique,
 } from '../factories';
 import { buildTestApp, type TestApp } from './support/test-app';
+import { createDecision } from '../factories/decisions';
 
 let t: TestApp;
 let team: Awaited<ReturnType<typeof createWorkshopWithTeam>>;
@@ -324,6 +325,19 @@ describe('PATCH /api/workshops/:wid/vehicles/:vid', () => {
       .send({ version: 0, bodyPlanKey: 'open-tourer-4d' })
       .expect(400);
     expect(Object.keys(res.body.error.fields)).toEqual(['bodyPlanKey']);
+    await v.reload();
+    expect(v.bodyPlanKey).toBe('closed-saloon-4d');
+  });
+
+  it('refuses a body plan that lacks a zone the vehicle has a repair decision on', async () => {
+    const v = await createVehicle(team.workshop, { bodyPlanKey: 'closed-saloon-4d' });
+    await createDecision(v, { zoneKey: 'roof-rail-left' });
+    const res = await api()
+      .patch(`${base()}/${v.id}`)
+      .set(team.owner.auth)
+      .send({ version: 0, bodyPlanKey: 'open-tourer-4d' })
+      .expect(400);
+    expect(res.body.error.fields.bodyPlanKey).toMatch(/roof-rail-left/);
     await v.reload();
     expect(v.bodyPlanKey).toBe('closed-saloon-4d');
   });

@@ -18,7 +18,7 @@ import type {
 import type { z } from 'zod';
 import { AppError, badRequest, forbidden, notFound, staleVersion } from '../errors';
 import type { MemberContext } from '../middleware/workshop';
-import { Finding, Vehicle } from '../models';
+import { Finding, MemberDecision, Vehicle } from '../models';
 import { audit, diff, snapshot } from './audit';
 import { describeVehicle, findVehicleFor, visibleVehiclesWhere } from './vehicle-access';
 
@@ -261,21 +261,25 @@ export async function updateVehicle(member: MemberContext, vehicleId: string, bo
   return withSummary(id);
 }
 
-/** A vehicle cannot move to a plan that lacks a zone its findings sit on. */
+/** A vehicle cannot move to a plan that lacks a zone its findings or member decisions sit on. */
 async function assertZonesOnPlan(vehicleId: string, planKey: string, transaction: Transaction) {
   const plan = getBodyPlan(planKey)!;
   const zoneKeys = new Set(plan.zones.map((z) => z.key));
-  const used = await Finding.findAll({
-    where: { vehicleId },
-    attributes: ['zoneKey'],
-    group: ['zoneKey'],
-    paranoid: false,
-    transaction,
-  });
-  const missing = used.map((f) => f.zoneKey).filter((k) => !zoneKeys.has(k));
+  const [findings, decisions] = await Promise.all([
+    Finding.findAll({
+      where: { vehicleId },
+      attributes: ['zoneKey'],
+      group: ['zoneKey'],
+      paranoid: false,
+      transaction,
+    }),
+    MemberDecision.findAll({ where: { vehicleId }, attributes: ['zoneKey'], transaction }),
+  ]);
+  const used = new Set([...findings, ...decisions].map((r) => r.zoneKey));
+  const missing = [...used].filter((k) => !zoneKeys.has(k));
   if (missing.length)
     throw badRequest({
-      bodyPlanKey: `That plan has no ${missing.join(', ')}, where this vehicle has findings`,
+      bodyPlanKey: `That plan has no ${missing.join(', ')}, where this vehicle has findings or repair decisions`,
     });
 }
 
