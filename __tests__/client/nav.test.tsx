@@ -105,16 +105,17 @@ const outboxOn = () => (answers['/api/dev/outbox'] = { status: 200, body: { item
 describe('navigation entries', () => {
   it('follows the role table: team for members.read roles, never for clients', () => {
     const keys = (role: Role, outbox: boolean) => navItemsFor(role, outbox).map((i) => i.key);
-    expect(keys('owner', true)).toEqual(['vehicles', 'team', 'mail', 'account']);
-    expect(keys('applicator', false)).toEqual(['vehicles', 'team', 'account']);
-    expect(keys('client', true)).toEqual(['vehicles', 'mail', 'account']);
-    expect(keys('client', false)).toEqual(['vehicles', 'account']);
+    expect(keys('owner', true)).toEqual(['vehicles', 'team', 'mail', 'settings', 'account']);
+    expect(keys('applicator', false)).toEqual(['vehicles', 'team', 'settings', 'account']);
+    expect(keys('client', true)).toEqual(['vehicles', 'mail', 'settings', 'account']);
+    expect(keys('client', false)).toEqual(['vehicles', 'settings', 'account']);
   });
 
   it('marks the section a path belongs to', () => {
     expect(activeNavKey('/')).toBe('vehicles');
     expect(activeNavKey('/vehicles/x/surveys/new')).toBe('vehicles');
     expect(activeNavKey('/members')).toBe('team');
+    expect(activeNavKey('/settings')).toBe('settings');
     expect(activeNavKey('/sign-in')).toBeNull();
   });
 });

@@ -10,13 +10,9 @@ import {
 import {
   DomainError,
   estimateRepair,
-  recommendVerdict,
-  residualSection,
-  scarfLength,
+  assessMember,
   VERDICT_OPTION_LABELS,
   type DecisionClass,
-  type Verdict,
-  type VerdictInput,
   type VerdictOption,
 } from '@/shared/wood';
 import { badRequest, notFound, staleVersion } from '../errors';
@@ -229,17 +225,9 @@ export async function saveDecision(
     if (!workshop) throw notFound('Workshop');
     const settings = readSettings(workshop.settings);
     const evidence = await zoneEvidence(vehicle.id, zoneKey, transaction);
-    const section = inRequestTerms(() =>
-      residualSection({ width: inputs.widthMm, depth: inputs.depthMm, decay: inputs.decayMm }),
-    );
-    const verdictInput: VerdictInput = {
+    const context = {
       structuralClass: zone.structuralClass,
-      sectionModulusRatio: section.sectionModulusRatio,
-      areaRatio: section.areaRatio,
-      affectedLengthMm: inputs.affectedLengthMm,
-      memberLengthMm: inputs.memberLengthMm,
-      atJointOrFitting: inputs.atJointOrFitting,
-      severity: evidence.severity,
+      worstSeverity: evidence.severity,
       activeAgent: evidence.activeAgent,
       assemblyMembersNeedingReplacement: await assemblyReplacements(
         vehicle.id,
@@ -247,12 +235,8 @@ export async function saveDecision(
         zone,
         transaction,
       ),
-      // A splice whose scarfs at the workshop's slope would not fit in the member is a replacement.
-      scarfLengthMm: inRequestTerms(() => scarfLength(inputs.depthMm, settings.wood.scarfSlope)),
     };
-    const verdict: Verdict = inRequestTerms(() =>
-      recommendVerdict(verdictInput, settings.wood.verdictRules),
-    );
+    const { verdict } = inRequestTerms(() => assessMember(inputs, context, settings.wood));
     const overridden = body.chosenOption !== verdict.option;
 
     const errors: Record<string, string> = {};

@@ -47,3 +47,4 @@ export {
   type RepairEstimateInput,
 } from './estimate';
 export * from './units';
+export { assessMember, type MemberContext, type MemberMeasurements } from './assess';

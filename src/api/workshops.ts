@@ -1,6 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { updateWorkshopRequest, workshopResponse } from '@/shared/schemas';
+import {
+  updateWorkshopRequest,
+  workshopResponse,
+  type WorkshopResponse,
+  type WorkshopSettings,
+} from '@/shared/schemas';
 import { request } from './client';
 import { STALE } from './query-client';
 
@@ -25,6 +30,14 @@ export function useWorkshop(wid: string) {
   return useQuery(workshopQueries.detail(wid));
 }
 
+/** Units, rates and wood settings (the server fills defaults for anything never saved). */
+export function useWorkshopSettings(wid: string) {
+  return useQuery({
+    ...workshopQueries.detail(wid),
+    select: (w: WorkshopResponse): WorkshopSettings => w.settings,
+  });
+}
+
 export function useUpdateWorkshop(wid: string) {
   const queryClient = useQueryClient();
   return useMutation({
@@ -33,6 +46,9 @@ export function useUpdateWorkshop(wid: string) {
         body: updateWorkshopRequest.parse(body),
         schema: workshopResponse,
       }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: workshopKeys.detail(wid) }),
+    onSuccess: (workshop) => {
+      queryClient.setQueryData(workshopKeys.detail(wid), workshop);
+      return queryClient.invalidateQueries({ queryKey: workshopKeys.detail(wid) });
+    },
   });
 }

@@ -8,6 +8,8 @@ import { ApiRequestError, cleanError } from '@/src/api/client';
 import { findingQueries, useCreateFinding, useUpdateFinding } from '@/src/api/findings';
 import { newId } from '@/src/api/ids';
 import { AppText, Button, useToast } from '@/src/components/ui';
+import type { Units } from '@/src/components/wood/labels';
+import type { ShopClimate } from '@/src/components/wood/moisture';
 import { colors, radius, spacing } from '@/src/theme';
 import { FindingForm } from './finding-form';
 import { FindingPhotos } from './finding-photos';
@@ -38,13 +40,25 @@ type Props = {
   /** Saved (and every photo uploaded), or the user chose Done: leave the form. */
   onDone(finding: FindingResponse): void;
   onDeleted?(finding: FindingResponse): void;
+  /** The survey's shop climate, for the moisture panel (null: none recorded or not known). */
+  climate?: ShopClimate | null;
+  units?: Units;
 };
 
 /**
  * Log or edit one finding. A new finding is saved first and its photos uploaded after, one by
  * one, so a failed photo can be retried without losing (or duplicating) the finding.
  */
-export function FindingEditor({ wid, plan, role, mode, onDone, onDeleted }: Props) {
+export function FindingEditor({
+  wid,
+  plan,
+  role,
+  mode,
+  onDone,
+  onDeleted,
+  climate = null,
+  units = 'metric',
+}: Props) {
   const queryClient = useQueryClient();
   const toast = useToast();
   const startZone = mode.kind === 'new' ? mode.zoneKey : mode.finding.zoneKey;
@@ -184,6 +198,8 @@ export function FindingEditor({ wid, plan, role, mode, onDone, onDeleted }: Prop
         values={values}
         onChange={change}
         errors={errors}
+        climate={climate}
+        units={units}
         photos={
           <FindingPhotos
             saved={saved}

@@ -3,9 +3,19 @@ import { StyleSheet, View } from 'react-native';
 import { SPECIES_KEYS, type BodyPlan } from '@/shared/body-plans';
 import { ACTIVITY, DECAY_TYPES, PICK_TEST, PICK_TEST_LABELS } from '@/shared/schemas';
 import { AppText, Checkbox, SegmentedControl, Select, TextField } from '@/src/components/ui';
+import { AgentsPanel, hasAgentEvidence } from '@/src/components/wood/agents-panel';
+import type { Units } from '@/src/components/wood/labels';
+import { readMoisture, type ShopClimate } from '@/src/components/wood/moisture';
+import { MoisturePanel } from '@/src/components/wood/moisture-panel';
 import { colors, spacing } from '@/src/theme';
 import { EvidenceChips } from './evidence-chips';
-import { FACES, fieldError, type FindingFieldErrors, type FindingFormValues } from './form-values';
+import {
+  FACES,
+  fieldError,
+  parseNumber,
+  type FindingFieldErrors,
+  type FindingFormValues,
+} from './form-values';
 import { ACTIVITY_LABELS, DECAY_TYPE_LABELS, SPECIES_LABELS } from './labels';
 import { SeverityPicker } from './severity-picker';
 import { ZonePicker } from './zone-picker';
@@ -28,12 +38,18 @@ type Props = {
   errors: FindingFieldErrors;
   /** The photo section (picker, queued and saved photos). */
   photos: ReactNode;
+  /** The survey's shop climate, for the equilibrium moisture content (null: not known). */
+  climate: ShopClimate | null;
+  units: Units;
 };
 
 /** Every field of a finding, grouped in the order an inspector works a member. */
-export function FindingForm({ plan, values, onChange, errors, photos }: Props) {
+export function FindingForm({ plan, values, onChange, errors, photos, climate, units }: Props) {
   const err = (path: string) => fieldError(errors, path);
   const numeric = { keyboardType: 'decimal-pad' as const, inputMode: 'decimal' as const };
+  const hole = parseNumber(values.holeDiameterMm);
+  const holeDiameterMm = hole === null || Number.isNaN(hole) ? null : hole;
+  const moisture = readMoisture({ ...values, climate }).reading;
   return (
     <View style={styles.form}>
       <Section title="Where">
@@ -91,6 +107,15 @@ export function FindingForm({ plan, values, onChange, errors, photos }: Props) {
           onChange={(activity) => onChange({ activity })}
           testID="activity"
         />
+        {hasAgentEvidence({ ...values, holeDiameterMm }) ? (
+          <AgentsPanel
+            insectEvidence={values.insectEvidence}
+            holeDiameterMm={holeDiameterMm}
+            decayType={values.decayType}
+            moisturePercent={moisture?.corrected ?? null}
+            species={values.species}
+          />
+        ) : null}
       </Section>
 
       <Section title="Moisture">
@@ -118,6 +143,13 @@ export function FindingForm({ plan, values, onChange, errors, photos }: Props) {
             />
           </View>
         </View>
+        <MoisturePanel
+          meterReading={values.meterReading}
+          woodTempC={values.woodTempC}
+          species={values.species}
+          climate={climate}
+          units={units}
+        />
         <Select
           label="Species the meter is set for"
           options={speciesOptions}

@@ -87,7 +87,7 @@ export function valuesFromFinding(f: FindingResponse): FindingFormValues {
 const NOT_A_NUMBER = 'Enter a number, e.g. 12 or 12.5';
 
 /** '' → null, '12,5' → 12.5 (a comma keyboard is common on phones), junk → NaN. */
-function parseNumber(s: string): number | null {
+export function parseNumber(s: string): number | null {
   const t = s.trim().replace(',', '.');
   if (t === '') return null;
   return /^-?\d+(\.\d+)?$/.test(t) ? Number(t) : NaN;

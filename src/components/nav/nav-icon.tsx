@@ -48,6 +48,15 @@ export function NavIcon({
           <Path d="M3.5 7 L12 13 L20.5 7" {...stroke} />
         </>
       ) : null}
+      {name === 'settings' ? (
+        <>
+          {/* Three sliders; the lines stop at each knob so it reads on any background. */}
+          <Path d="M4 7 H7 M11 7 H20 M4 12 H13 M17 12 H20 M4 17 H5 M9 17 H20" {...stroke} />
+          <Circle cx={9} cy={7} r={2} {...stroke} />
+          <Circle cx={15} cy={12} r={2} {...stroke} />
+          <Circle cx={7} cy={17} r={2} {...stroke} />
+        </>
+      ) : null}
       {name === 'account' ? (
         <>
           <Circle cx={12} cy={8.5} r={3.5} {...stroke} />

@@ -1,16 +1,17 @@
 import { can, type Role } from '@/shared/roles';
 
-export type NavKey = 'vehicles' | 'team' | 'mail' | 'account';
+export type NavKey = 'vehicles' | 'team' | 'mail' | 'settings' | 'account';
 export type NavItem = {
   key: NavKey;
   label: string;
-  href: '/vehicles' | '/members' | '/outbox' | '/account';
+  href: '/vehicles' | '/members' | '/outbox' | '/settings' | '/account';
 };
 
 const ALL: NavItem[] = [
   { key: 'vehicles', label: 'Vehicles', href: '/vehicles' },
   { key: 'team', label: 'Team', href: '/members' },
   { key: 'mail', label: 'Mail', href: '/outbox' },
+  { key: 'settings', label: 'Settings', href: '/settings' },
   { key: 'account', label: 'Account', href: '/account' },
 ];
 
@@ -23,6 +24,9 @@ export function navItemsFor(role: Role, outboxAvailable: boolean): NavItem[] {
     if (item.key === 'vehicles') return can(role, 'vehicles.read');
     if (item.key === 'team') return can(role, 'members.read');
     if (item.key === 'mail') return outboxAvailable;
+    // The workshop's team reads the rates and thresholds behind the estimates (only the owner
+    // edits them); a client has no use for the shop's labour rate and timber prices.
+    if (item.key === 'settings') return can(role, 'members.read');
     return true;
   });
 }
@@ -32,6 +36,7 @@ export function activeNavKey(pathname: string): NavKey | null {
   if (pathname === '/' || pathname.startsWith('/vehicles')) return 'vehicles';
   if (pathname.startsWith('/members')) return 'team';
   if (pathname.startsWith('/outbox')) return 'mail';
+  if (pathname.startsWith('/settings')) return 'settings';
   if (pathname.startsWith('/account')) return 'account';
   return null;
 }

@@ -44,6 +44,7 @@ export function Select<T extends string>({
             testID={testID ? `${testID}-${o.value}` : undefined}
             accessibilityRole="radio"
             accessibilityState={{ checked: selected }}
+            aria-checked={selected}
             accessibilityLabel={o.description ? `${o.label}. ${o.description}` : o.label}
             onPress={() => onChange(o.value)}
             style={[styles.row, selected && styles.rowSelected]}
@@ -91,6 +92,7 @@ export function SegmentedControl<T extends string>({
               testID={testID ? `${testID}-${o.value}` : undefined}
               accessibilityRole="radio"
               accessibilityState={{ checked: selected }}
+              aria-checked={selected}
               onPress={() => onChange(o.value)}
               style={[
                 styles.segment,
@@ -141,6 +143,7 @@ export function Checkbox({ label, checked, onChange, description, testID }: Togg
       testID={testID}
       accessibilityRole="checkbox"
       accessibilityState={{ checked }}
+      aria-checked={checked}
       accessibilityLabel={label}
       onPress={() => onChange(!checked)}
       style={styles.checkRow}
@@ -167,6 +170,7 @@ export function ChipToggle({ label, checked, onChange, testID }: ToggleProps) {
       testID={testID}
       accessibilityRole="checkbox"
       accessibilityState={{ checked }}
+      aria-checked={checked}
       accessibilityLabel={label}
       onPress={() => onChange(!checked)}
       style={[styles.chip, checked && styles.chipChecked]}

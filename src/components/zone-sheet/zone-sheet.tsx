@@ -5,7 +5,8 @@ import {
   type BodyPlan,
   type StructuralClass,
 } from '@/shared/body-plans';
-import type { FindingResponse } from '@/shared/schemas';
+import type { DecisionResponse, FindingResponse } from '@/shared/schemas';
+import { DecisionSummary } from '@/src/components/decisions/decision-summary';
 import { speciesLabel } from '@/src/components/findings/labels';
 import { FindingCard } from '@/src/components/findings/finding-card';
 import { AppText, Badge, Button, SeverityBadge, type BadgeTone } from '@/src/components/ui';
@@ -26,6 +27,13 @@ type Props = {
   /** Shown instead of "Log a finding" for roles that may not write. */
   canLog: boolean;
   canEdit: boolean;
+  /** The zone's repair decision (null: none yet, or not loaded). */
+  decision?: DecisionResponse | null;
+  /** Workshop currency, for the decision's cost. */
+  currency?: string;
+  /** Shows "Decide the repair" to roles that make member decisions. */
+  canDecide: boolean;
+  onDecide(): void;
   onLogFinding(): void;
   onEditFinding(finding: FindingResponse): void;
   onOpenHistory(): void;
@@ -39,6 +47,10 @@ export function ZoneSheet({
   findings,
   canLog,
   canEdit,
+  decision,
+  currency,
+  canDecide,
+  onDecide,
   onLogFinding,
   onEditFinding,
   onOpenHistory,
@@ -95,9 +107,19 @@ export function ZoneSheet({
         </AppText>
       </View>
 
+      {decision ? <DecisionSummary decision={decision} currency={currency} /> : null}
+
       <View style={styles.actions}>
         {canLog ? (
           <Button label="Log a finding" onPress={onLogFinding} testID="zone-log-finding" />
+        ) : null}
+        {canDecide ? (
+          <Button
+            label={decision ? 'Review the repair' : 'Decide the repair'}
+            variant="secondary"
+            onPress={onDecide}
+            testID="zone-decide"
+          />
         ) : null}
         <Button
           label="Zone history"

@@ -10,9 +10,12 @@ import {
 } from '@/shared/body-plans';
 import { can } from '@/shared/roles';
 import type { FindingResponse } from '@/shared/schemas';
+import { useDecisions } from '@/src/api/decisions';
 import { useFindings } from '@/src/api/findings';
 import { useSurveys } from '@/src/api/surveys';
 import { useVehicle } from '@/src/api/vehicles';
+import { useWorkshopSettings } from '@/src/api/workshops';
+import { canDecide } from '@/src/components/decisions/can-decide';
 import { pinsForView, summarizeZones, type ViewPoint } from '@/src/components/body-diagram';
 import {
   DiagramPanel,
@@ -48,6 +51,8 @@ export default function VehicleOverview() {
   const vehicle = useVehicle(wid, vehicleId);
   const surveys = useSurveys(wid, vehicleId);
   const findings = useFindings(wid, vehicleId);
+  const decisions = useDecisions(wid, vehicleId);
+  const settings = useWorkshopSettings(wid);
   const [surveyFilter, setSurveyFilter] = useState('all');
   const [view, setView] = useState<ViewKey | null>(isViewKey(params.view) ? params.view : null);
   const [selected, setSelected] = useState<Selection | null>(
@@ -115,6 +120,15 @@ export default function VehicleOverview() {
         findings={visible.filter((f) => f.zoneKey === selected.zone)}
         canLog={canFindings}
         canEdit={canFindings}
+        decision={decisions.data?.find((d) => d.zoneKey === selected.zone) ?? null}
+        currency={settings.data?.currency}
+        canDecide={canDecide(role)}
+        onDecide={() =>
+          router.push({
+            pathname: '/vehicles/[vehicleId]/decisions/[zoneKey]',
+            params: { vehicleId, zoneKey: selected.zone },
+          })
+        }
         onLogFinding={() => logFinding(selected.zone)}
         onEditFinding={editFinding}
         onOpenHistory={() =>

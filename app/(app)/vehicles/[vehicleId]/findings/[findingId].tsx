@@ -3,7 +3,9 @@ import { getBodyPlan } from '@/shared/body-plans';
 import { can } from '@/shared/roles';
 import { cleanError } from '@/src/api/client';
 import { useFinding, useRestoreFinding } from '@/src/api/findings';
+import { useSurveys } from '@/src/api/surveys';
 import { useVehicle } from '@/src/api/vehicles';
+import { useWorkshopSettings } from '@/src/api/workshops';
 import { FindingCard } from '@/src/components/findings/finding-card';
 import { FindingEditor } from '@/src/components/findings/finding-editor';
 import { EmptyState, ErrorView, LoadingView, Screen, useToast } from '@/src/components/ui';
@@ -17,12 +19,16 @@ export default function EditFinding() {
   const role = useRole();
   const vehicle = useVehicle(wid, vehicleId);
   const finding = useFinding(wid, findingId);
+  // The shop climate of the finding's survey feeds the moisture panel; a failed list only loses that.
+  const surveys = useSurveys(wid, vehicleId);
+  const settings = useWorkshopSettings(wid);
   const restore = useRestoreFinding(wid);
   const toast = useToast();
   const back = () =>
     router.canGoBack() ? router.back() : router.replace(`/vehicles/${vehicleId}`);
 
-  if (vehicle.isPending || finding.isPending) return <LoadingView label="Loading the finding…" />;
+  if (vehicle.isPending || finding.isPending || surveys.isPending)
+    return <LoadingView label="Loading the finding…" />;
   if (vehicle.isError || finding.isError)
     return (
       <Screen title="Edit finding">
@@ -70,6 +76,8 @@ export default function EditFinding() {
           plan={plan}
           role={role}
           mode={{ kind: 'edit', finding: f }}
+          climate={surveys.data?.find((s) => s.id === f.surveyId) ?? null}
+          units={settings.data?.units}
           onDone={back}
           onDeleted={back}
         />

@@ -3,6 +3,7 @@ import { getBodyPlan } from '@/shared/body-plans';
 import { can } from '@/shared/roles';
 import { useSurveys } from '@/src/api/surveys';
 import { useVehicle } from '@/src/api/vehicles';
+import { useWorkshopSettings } from '@/src/api/workshops';
 import { FindingEditor } from '@/src/components/findings/finding-editor';
 import { sortSurveys } from '@/src/components/findings/overview';
 import { Button, EmptyState, ErrorView, LoadingView, Screen } from '@/src/components/ui';
@@ -23,6 +24,7 @@ export default function NewFinding() {
   const role = useRole();
   const vehicle = useVehicle(wid, p.vehicleId);
   const surveys = useSurveys(wid, p.vehicleId);
+  const settings = useWorkshopSettings(wid);
   const back = () =>
     router.canGoBack() ? router.back() : router.replace(`/vehicles/${p.vehicleId}`);
 
@@ -38,6 +40,7 @@ export default function NewFinding() {
     );
   const plan = getBodyPlan(vehicle.data.bodyPlanKey);
   const surveyId = p.surveyId ?? sortSurveys(surveys.data)[0]?.id;
+  const survey = surveys.data.find((s) => s.id === surveyId) ?? null;
   const x = Number(p.x);
   const y = Number(p.y);
   const pin = p.view && Number.isFinite(x) && Number.isFinite(y) ? { view: p.view, x, y } : null;
@@ -71,6 +74,8 @@ export default function NewFinding() {
           plan={plan}
           role={role}
           mode={{ kind: 'new', surveyId, zoneKey: p.zone ?? '', pin }}
+          climate={survey}
+          units={settings.data?.units}
           onDone={back}
         />
       )}
