@@ -179,8 +179,12 @@ describe('member decision screen', () => {
     expect(screen.queryByTestId('cut-list')).toBeNull();
 
     type('decision-decay-bottom', '20');
-    // Depth 45 of 70: (45/70)² = 41 %, below consolidate; 200 of 900 mm is within the 35 % splice limit.
+    // Depth 45 of 70: (45/70)² = 41 %, below consolidate. 200 of 900 mm is within the 35 % splice
+    // limit, but two 700 mm scarfs (1:10 through 70 mm) do not fit a 900 mm member: replace it.
     expect(screen.getByTestId('ratio-modulus')).toHaveTextContent('41 %');
+    expect(screen.getByTestId('recommendation-option')).toHaveTextContent('Replace the member');
+    // On a 2400 mm member the splice fits (200 + 2 × 700 = 1600 mm of new wood).
+    type('decision-member-length', '2400');
     expect(screen.getByTestId('recommendation-option')).toHaveTextContent('Splice in new wood');
     expect(screen.getByTestId('recommendation-reasons')).toHaveTextContent(
       /41 % of the section modulus/,
@@ -200,6 +204,7 @@ describe('member decision screen', () => {
     );
     renderEditor();
     type('decision-decay-bottom', '20');
+    type('decision-member-length', '2400');
     fireEvent.press(screen.getByTestId('decision-option-replace-member'));
     expect(screen.getByTestId('decision-choice-status')).toHaveTextContent(
       'Chosen: replace the member, instead of the recommended splice in new wood.',
@@ -222,7 +227,7 @@ describe('member decision screen', () => {
         depthMm: 70,
         decayMm: { top: 5, bottom: 20, left: 0, right: 0 },
         affectedLengthMm: 200,
-        memberLengthMm: 900,
+        memberLengthMm: 2400,
         atJointOrFitting: false,
         species: 'white-ash',
       },

@@ -107,8 +107,8 @@ describe('navigation entries', () => {
     const keys = (role: Role, outbox: boolean) => navItemsFor(role, outbox).map((i) => i.key);
     expect(keys('owner', true)).toEqual(['vehicles', 'team', 'mail', 'settings', 'account']);
     expect(keys('applicator', false)).toEqual(['vehicles', 'team', 'settings', 'account']);
-    expect(keys('client', true)).toEqual(['vehicles', 'mail', 'settings', 'account']);
-    expect(keys('client', false)).toEqual(['vehicles', 'settings', 'account']);
+    expect(keys('client', true)).toEqual(['vehicles', 'mail', 'account']);
+    expect(keys('client', false)).toEqual(['vehicles', 'account']);
   });
 
   it('marks the section a path belongs to', () => {

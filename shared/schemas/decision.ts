@@ -9,7 +9,12 @@ const mm = z.number().min(0).max(10000);
 export const decisionInputs = z.object({
   widthMm: z.number().positive().max(1000),
   depthMm: z.number().positive().max(1000),
-  decayMm: z.object({ top: mm.default(0), bottom: mm.default(0), left: mm.default(0), right: mm.default(0) }),
+  decayMm: z.object({
+    top: mm.default(0),
+    bottom: mm.default(0),
+    left: mm.default(0),
+    right: mm.default(0),
+  }),
   affectedLengthMm: mm,
   memberLengthMm: z.number().positive().max(10000),
   atJointOrFitting: z.boolean().default(false),
@@ -57,7 +62,9 @@ export const decisionResponse = z.object({
       cost: z.number(),
     }),
   ),
-  splice: z.object({ slope: z.number(), scarfLengthMm: z.number(), minSpacingMm: z.number() }).nullable(),
+  splice: z
+    .object({ slope: z.number(), scarfLengthMm: z.number(), minSpacingMm: z.number() })
+    .nullable(),
   notes: z.string(),
   decidedById: uuid.nullable(),
   decidedByName: z.string().nullable(),
@@ -66,4 +73,3 @@ export const decisionResponse = z.object({
   updatedAt: isoDateTime,
 });
 export type DecisionResponse = z.infer<typeof decisionResponse>;
-
