@@ -81,6 +81,32 @@ function runStaticChecks(): Promise<number> {
   }, Promise.resolve(0));
 }
 
+/** Folders of earlier runs whose test runner is gone (crashed or killed): stop their MariaDB, delete them. */
+async function removeAbandonedRuns(runsDir: string): Promise<void> {
+  if (fs.existsSync(path.join(runsDir, 'mysql'))) {
+    // The folder itself is a data folder from before runs had folders of their own.
+    await stopStrayInstances(runsDir);
+    fs.rmSync(runsDir, { recursive: true, force: true });
+  }
+  if (!fs.existsSync(runsDir)) return;
+  for (const name of fs.readdirSync(runsDir)) {
+    const pid = Number(/^run-(\d+)$/.exec(name)?.[1]);
+    if (!pid || isAlive(pid)) continue;
+    const dir = path.join(runsDir, name);
+    await stopStrayInstances(dir);
+    fs.rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+function isAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 async function main(): Promise<number> {
   const args = process.argv.slice(2);
   const staticCode = args.length === 0 ? await runStaticChecks() : 0;
@@ -90,9 +116,11 @@ async function main(): Promise<number> {
     throw new ToolError('mariadb-server is installed but its programs are missing.');
   checkInterrupted();
 
-  const dataDir = path.join(REPO_ROOT, '.data', 'test-mariadb');
+  // One folder per run, so two `npm test` runs on one machine never share (or stop) a database.
+  const runsDir = path.join(REPO_ROOT, '.data', 'test-mariadb');
+  const dataDir = path.join(runsDir, `run-${process.pid}`);
   const artifactsDir = path.join(REPO_ROOT, '.artifacts');
-  await stopStrayInstances(dataDir);
+  await removeAbandonedRuns(runsDir);
   fs.rmSync(dataDir, { recursive: true, force: true });
   fs.mkdirSync(artifactsDir, { recursive: true });
 
@@ -140,6 +168,7 @@ async function main(): Promise<number> {
       await db.stop();
       console.log('Test MariaDB shut down.');
     }
+    fs.rmSync(dataDir, { recursive: true, force: true });
   }
 }
 
