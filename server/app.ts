@@ -15,7 +15,9 @@ import { devRoutes } from './routes/dev';
 import { findingRoutes } from './routes/findings';
 import { invitationPublicRoutes } from './routes/invitations';
 import { photoRoutes } from './routes/photos';
+import { recheckRoutes } from './routes/rechecks';
 import { surveyRoutes } from './routes/surveys';
+import { treatmentRoutes } from './routes/treatments';
 import { vehicleRoutes } from './routes/vehicles';
 import { workshopRoutes } from './routes/workshops';
 import type { StorageAdapter } from './storage';
@@ -67,6 +69,8 @@ export function createApp(deps: AppDeps) {
   scoped.use(findingRoutes());
   scoped.use(photoRoutes());
   scoped.use(decisionRoutes());
+  scoped.use(treatmentRoutes());
+  scoped.use(recheckRoutes());
   api.use('/workshops/:workshopId', scoped);
 
   api.use((_req, _res, next) => next(notFound('API route')));

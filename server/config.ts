@@ -1,3 +1,5 @@
+import crypto from 'node:crypto';
+import os from 'node:os';
 import path from 'node:path';
 import { z } from 'zod';
 
@@ -43,6 +45,15 @@ const envSchema = z
     OUTBOX_ENABLED: bool.optional(),
     SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
     TRUST_PROXY: bool.default(false),
+    REMINDERS_ENABLED: bool.optional(),
+    REMINDER_INTERVAL_SECONDS: z.coerce
+      .number()
+      .int()
+      .min(1)
+      .max(24 * 60 * 60)
+      .default(900),
+    REMINDER_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(20).default(5),
+    INSTANCE_ID: z.string().trim().min(1).max(100).optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && (!env.JWT_SECRET || env.JWT_SECRET.length < 32))
@@ -116,5 +127,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     outboxEnabled: e.OUTBOX_ENABLED ?? !production,
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
     trustProxy: e.TRUST_PROXY,
+    reminders: {
+      // Off in tests so a test app never mails on its own; reminder tests turn it on or call the cycle.
+      enabled: e.REMINDERS_ENABLED ?? e.NODE_ENV !== 'test',
+      intervalMs: e.REMINDER_INTERVAL_SECONDS * 1000,
+      maxAttempts: e.REMINDER_MAX_ATTEMPTS,
+    },
+    /** Names this process in job claims; unique per process unless set. */
+    instanceId:
+      e.INSTANCE_ID ?? `${os.hostname()}-${process.pid}-${crypto.randomBytes(3).toString('hex')}`,
   };
 }

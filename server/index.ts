@@ -3,6 +3,7 @@ import type { Sequelize } from 'sequelize';
 import { createApp } from './app';
 import { loadConfig, type Config } from './config';
 import { createSequelize } from './db';
+import { startReminderJob } from './jobs/reminder-job';
 import { createMailer } from './mail/transport';
 import { createStorage } from './storage';
 
@@ -27,11 +28,16 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.port;
   const url = `http://${config.host}:${port}`;
+  const reminders = config.reminders.enabled
+    ? startReminderJob({ config, sequelize, mailer, publicUrl: config.publicUrl ?? url })
+    : null;
   return {
     port,
     url,
     app,
     async close() {
+      // Let a digest being sent finish (and be recorded) before its connections go.
+      await reminders?.stop();
       const closed = new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await closed;

@@ -19,6 +19,8 @@ export const ACTIONS = [
   'findings.write',
   'photos.write',
   'decisions.write',
+  'treatments.write',
+  'rechecks.write',
 ] as const;
 export type Action = (typeof ACTIONS)[number];
 
@@ -32,13 +34,21 @@ const INSPECTOR: Action[] = [
   'findings.write',
   'photos.write',
   'decisions.write',
+  'treatments.write',
+  'rechecks.write',
 ];
 
 export const PERMISSIONS: Record<Role, readonly Action[]> = {
   owner: ACTIONS,
   inspector: INSPECTOR,
-  // Applicators read everything; treatment and re-check writes arrive with the treatment work.
-  applicator: ['workshop.read', 'members.read', 'vehicles.read'],
+  // Applicators read everything and record treatments and their re-checks.
+  applicator: [
+    'workshop.read',
+    'members.read',
+    'vehicles.read',
+    'treatments.write',
+    'rechecks.write',
+  ],
   // Clients read only the vehicles shared with them (enforced per vehicle on the server).
   client: ['workshop.read', 'vehicles.read'],
 };

@@ -14,6 +14,7 @@ import { ApiRequestError, request } from '@/src/api/client';
 import { DecisionEditor } from '@/src/components/decisions/decision-editor';
 import { ToastProvider } from '@/src/components/ui';
 import { fixturePlan } from './fixtures/fixture-plan';
+import { DEFAULT_TREATMENT_SETTINGS } from '@/shared/treatments';
 
 jest.mock('@/src/api/client', () => ({
   ...jest.requireActual('@/src/api/client'),
@@ -33,6 +34,7 @@ const settings = (over: Partial<WorkshopSettings> = {}): WorkshopSettings => ({
   labourRatePerHour: 40,
   currency: 'EUR',
   wood: DEFAULT_WOOD_SETTINGS,
+  treatments: DEFAULT_TREATMENT_SETTINGS,
   ...over,
 });
 

@@ -104,7 +104,12 @@ describe('POST /api/auth/sign-in', () => {
       .expect(200);
 
     const session = sessionResponse.parse(res.body);
-    expect(session.user).toEqual({ id: user.id, name: user.name, email: user.email });
+    expect(session.user).toEqual({
+      id: user.id,
+      name: user.name,
+      email: user.email,
+      remindersEnabled: true,
+    });
     expect(session.memberships).toEqual([
       {
         id: expect.any(String),

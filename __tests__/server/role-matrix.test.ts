@@ -22,6 +22,7 @@ import {
 import { buildSaveDecision, createDecision } from '../factories/decisions';
 import { createInvitation } from '../factories/invitations';
 import { appStorage, createPhoto, jpeg } from '../factories/photos';
+import { buildTreatment, createRecheck, createTreatment } from '../factories/treatments';
 import { buildTestApp, type TestApp } from './support/test-app';
 
 /**
@@ -82,6 +83,10 @@ afterAll(async () => {
   fs.rmSync(mailDir, { recursive: true, force: true });
 });
 
+async function recheckOn(vehicle: Awaited<ReturnType<typeof createVehicle>>) {
+  return createRecheck(await createTreatment(vehicle));
+}
+
 async function freshRecords() {
   const vehicle = await createVehicle(team.workshop);
   await grantAccess(vehicle, team.client.user.id);
@@ -131,6 +136,12 @@ const ROUTES: Row[] = [
     needs: 'signed-in',
     ok: 200,
     build: () => ({ url: '/api/auth/session' }),
+  },
+  {
+    route: 'PATCH /api/auth/preferences',
+    needs: 'signed-in',
+    ok: 200,
+    build: () => ({ url: '/api/auth/preferences', body: { remindersEnabled: true } }),
   },
   {
     route: 'GET /api/invitations/:token',
@@ -470,6 +481,111 @@ const ROUTES: Row[] = [
       await createDecision(f.vehicle, { zoneKey: 'sill-right' });
       return { url: `${f.w}/vehicles/${f.vehicle.id}/decisions/sill-right` };
     },
+  },
+  // Treatments and re-checks
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/treatments',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await createTreatment(f.vehicle);
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/treatments` };
+    },
+  },
+  {
+    route: 'POST /api/workshops/:wid/vehicles/:vid/treatments',
+    needs: 'treatments.write',
+    vehicle: true,
+    ok: 201,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/treatments`, body: buildTreatment() }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/treatments/:tid',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({ url: `${f.w}/treatments/${(await createTreatment(f.vehicle)).id}` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/treatments/:tid/corrections',
+    needs: 'treatments.write',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({
+      url: `${f.w}/treatments/${(await createTreatment(f.vehicle)).id}/corrections`,
+      body: { ...buildTreatment({ dilution: '1 part to 5' }), version: 0, reason: 'Misread' },
+    }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/rechecks',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await createTreatment(f.vehicle, { dueDates: ['2026-12-09'] });
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/rechecks` };
+    },
+  },
+  // Across vehicles: a client sees only shared ones, so an unshared client gets a list too.
+  {
+    route: 'GET /api/workshops/:wid/rechecks/due',
+    needs: 'vehicles.read',
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/rechecks/due?days=14` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/rechecks/:rid/result',
+    needs: 'rechecks.write',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({
+      url: `${f.w}/rechecks/${(await recheckOn(f.vehicle)).id}/result`,
+      body: { version: 0, result: 'clean', frassCleaned: true },
+    }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/rechecks/:rid/move',
+    needs: 'rechecks.write',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({
+      url: `${f.w}/rechecks/${(await recheckOn(f.vehicle)).id}/move`,
+      body: { version: 0, dueDate: '2026-12-20', reason: 'Vehicle away' },
+    }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/rechecks/:rid/assign',
+    needs: 'rechecks.write',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({
+      url: `${f.w}/rechecks/${(await recheckOn(f.vehicle)).id}/assign`,
+      body: { version: 0, assigneeId: team.applicator.user.id },
+    }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/rechecks/:rid/calendar.ics',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({
+      url: `${f.w}/rechecks/${(await recheckOn(f.vehicle)).id}/calendar.ics`,
+    }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/zone-states',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/zone-states` }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/timeline',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/timeline?kinds=finding,treatment` }),
   },
 ];
 

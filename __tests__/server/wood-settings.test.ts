@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { AuditEntry, Workshop } from '@/server/models';
 import { workshopResponse } from '@/shared/schemas/workshop';
+import { DEFAULT_TREATMENT_SETTINGS } from '@/shared/treatments';
 import { DEFAULT_WOOD_SETTINGS } from '@/shared/wood';
 import { createWorkshopWithTeam } from '../factories';
 import { buildTestApp, type TestApp } from './support/test-app';
@@ -63,6 +64,7 @@ describe('PATCH /api/workshops/:wid — wood settings', () => {
       labourRatePerHour: 55,
       currency: 'GBP',
       wood: expected,
+      treatments: DEFAULT_TREATMENT_SETTINGS,
     });
 
     // A second partial change, one price, keeps the threshold set before.

@@ -4,6 +4,7 @@ import { workshopResponse } from '@/shared/schemas/workshop';
 import { DEFAULT_WOOD_SETTINGS } from '@/shared/wood';
 import { createWorkshop, createWorkshopWithTeam, unique } from '../factories';
 import { buildTestApp, type TestApp } from './support/test-app';
+import { DEFAULT_TREATMENT_SETTINGS } from '@/shared/treatments';
 
 let t: TestApp;
 beforeAll(() => {
@@ -29,6 +30,7 @@ describe('GET /api/workshops/:wid', () => {
           labourRatePerHour: 0,
           currency: 'EUR',
           wood: DEFAULT_WOOD_SETTINGS,
+          treatments: DEFAULT_TREATMENT_SETTINGS,
         },
         role,
       });
@@ -62,6 +64,7 @@ describe('PATCH /api/workshops/:wid', () => {
       labourRatePerHour: 65,
       currency: 'EUR',
       wood: DEFAULT_WOOD_SETTINGS,
+      treatments: DEFAULT_TREATMENT_SETTINGS,
     });
 
     const name = unique('Renamed Coachworks');
@@ -89,6 +92,7 @@ describe('PATCH /api/workshops/:wid', () => {
       labourRatePerHour: 65,
       currency: 'EUR',
       wood: DEFAULT_WOOD_SETTINGS,
+      treatments: DEFAULT_TREATMENT_SETTINGS,
     });
     const entries = await AuditEntry.findAll({
       where: { workshopId: workshop.id, action: 'workshop.update' },

@@ -1,10 +1,14 @@
 import * as initialSchema from './20261201000000-initial-schema';
 import * as auditTimePrecision from './20261202000000-audit-time-precision';
 import * as memberDecisions from './20261203000000-member-decisions';
+import * as treatments from './20261204000000-treatments';
+import * as reminders from './20261205000000-reminders';
 
 /** Every migration, in order. Named by timestamp; each has `up` and `down`. */
 export const MIGRATIONS = [
   { name: '20261201000000-initial-schema', ...initialSchema },
   { name: '20261202000000-audit-time-precision', ...auditTimePrecision },
   { name: '20261203000000-member-decisions', ...memberDecisions },
+  { name: '20261204000000-treatments', ...treatments },
+  { name: '20261205000000-reminders', ...reminders },
 ];

@@ -5,7 +5,11 @@ import { Invitation } from './invitation';
 import { MemberDecision } from './member-decision';
 import { Membership } from './membership';
 import { Photo } from './photo';
+import { ReCheck } from './re-check';
+import { ReminderDelivery } from './reminder-delivery';
 import { Survey } from './survey';
+import { Treatment } from './treatment';
+import { TreatmentVersion } from './treatment-version';
 import { User } from './user';
 import { Vehicle } from './vehicle';
 import { VehicleAccess } from './vehicle-access';
@@ -18,7 +22,11 @@ export {
   MemberDecision,
   Membership,
   Photo,
+  ReCheck,
+  ReminderDelivery,
   Survey,
+  Treatment,
+  TreatmentVersion,
   User,
   Vehicle,
   VehicleAccess,
@@ -38,6 +46,10 @@ export function initModels(sequelize: Sequelize) {
     Finding,
     Photo,
     MemberDecision,
+    Treatment,
+    TreatmentVersion,
+    ReCheck,
+    ReminderDelivery,
     AuditEntry,
   ])
     m.initModel(sequelize);
@@ -80,6 +92,25 @@ export function initModels(sequelize: Sequelize) {
   MemberDecision.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
   MemberDecision.belongsTo(User, { foreignKey: 'decidedById', as: 'decidedBy' });
   MemberDecision.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+
+  Vehicle.hasMany(Treatment, { foreignKey: 'vehicleId', as: 'treatments' });
+  Treatment.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  Treatment.belongsTo(User, { foreignKey: 'recordedById', as: 'recordedBy' });
+  Treatment.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  Treatment.hasMany(TreatmentVersion, { foreignKey: 'treatmentId', as: 'versions' });
+  TreatmentVersion.belongsTo(Treatment, { foreignKey: 'treatmentId', as: 'treatment' });
+  TreatmentVersion.belongsTo(User, { foreignKey: 'changedById', as: 'changedBy' });
+
+  Treatment.hasMany(ReCheck, { foreignKey: 'treatmentId', as: 'rechecks' });
+  ReCheck.belongsTo(Treatment, { foreignKey: 'treatmentId', as: 'treatment' });
+  ReCheck.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  ReCheck.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  ReCheck.belongsTo(User, { foreignKey: 'assigneeId', as: 'assignee' });
+  ReCheck.belongsTo(User, { foreignKey: 'completedById', as: 'completedBy' });
+  ReCheck.belongsTo(Finding, { foreignKey: 'findingId', as: 'finding' });
+
+  ReminderDelivery.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  ReminderDelivery.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
 
   AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   AuditEntry.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });

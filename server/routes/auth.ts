@@ -1,6 +1,11 @@
 import crypto from 'node:crypto';
 import { Router, type Request, type Response } from 'express';
-import { signInRequest, signUpRequest, type SessionResponse } from '@/shared/schemas/auth';
+import {
+  signInRequest,
+  signUpRequest,
+  updatePreferencesRequest,
+  type SessionResponse,
+} from '@/shared/schemas/auth';
 import { depsOf } from '../app';
 import type { Config } from '../config';
 import {
@@ -14,7 +19,7 @@ import {
 } from '../middleware/auth';
 import { signInRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
-import { sessionFor, signIn, signUp } from '../services/auth';
+import { sessionFor, signIn, signUp, updatePreferences } from '../services/auth';
 
 /**
  * Signs the user in on this response: the httpOnly session cookie and the CSRF cookie for the
@@ -29,6 +34,21 @@ export async function startSession(
   const token = signSessionToken(config, userId);
   const csrfToken = setSessionCookies(res, config, token);
   return { ...body, csrfToken, token };
+}
+
+/** The session answer for a request that is already signed in, keeping (or repairing) its CSRF cookie. */
+async function currentSession(req: Request, res: Response): Promise<SessionResponse> {
+  const { config } = depsOf(req);
+  const auth = authOf(res);
+  const body = await sessionFor(auth.userId);
+  const existing = req.cookies?.[CSRF_COOKIE] as string | undefined;
+  let csrfToken: string;
+  if (existing) csrfToken = existing;
+  else if (auth.via === 'cookie')
+    // The CSRF cookie was lost (e.g. cleared by hand): pair the session cookie with a new one.
+    csrfToken = setSessionCookies(res, config, req.cookies[SESSION_COOKIE] as string);
+  else csrfToken = crypto.randomBytes(24).toString('base64url'); // Bearer clients need no CSRF token
+  return { ...body, csrfToken };
 }
 
 export function authRoutes() {
@@ -62,18 +82,18 @@ export function authRoutes() {
   });
 
   router.get('/session', requireAuth, async (req: Request, res: Response) => {
-    const { config } = depsOf(req);
-    const auth = authOf(res);
-    const body = await sessionFor(auth.userId);
-    const existing = req.cookies?.[CSRF_COOKIE] as string | undefined;
-    let csrfToken: string;
-    if (existing) csrfToken = existing;
-    else if (auth.via === 'cookie')
-      // The CSRF cookie was lost (e.g. cleared by hand): pair the session cookie with a new one.
-      csrfToken = setSessionCookies(res, config, req.cookies[SESSION_COOKIE] as string);
-    else csrfToken = crypto.randomBytes(24).toString('base64url'); // Bearer clients need no CSRF token
-    res.json({ ...body, csrfToken } satisfies SessionResponse);
+    res.json(await currentSession(req, res));
   });
+
+  router.patch(
+    '/preferences',
+    requireAuth,
+    validate({ body: updatePreferencesRequest }),
+    async (req: Request, res: Response) => {
+      await updatePreferences(authOf(res).userId, req.body);
+      res.json(await currentSession(req, res));
+    },
+  );
 
   return router;
 }

@@ -1,6 +1,11 @@
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { ERROR_CODES } from '@/shared/schemas/common';
-import type { SessionResponse, SignInRequest, SignUpRequest } from '@/shared/schemas/auth';
+import type {
+  SessionResponse,
+  SignInRequest,
+  SignUpRequest,
+  UpdatePreferencesRequest,
+} from '@/shared/schemas/auth';
 import { workshopSettings } from '@/shared/schemas/workshop';
 import { AppError, unauthenticated } from '../errors';
 import { Membership, User, Workshop } from '../models';
@@ -34,7 +39,12 @@ export async function sessionFor(userId: string): Promise<SessionBody> {
     throw unauthenticated('Your account no longer exists. Sign up or ask for a new invitation.');
   const memberships = (user as User & { memberships?: Membership[] }).memberships ?? [];
   return {
-    user: { id: user.id, name: user.name, email: user.email },
+    user: {
+      id: user.id,
+      name: user.name,
+      email: user.email,
+      remindersEnabled: user.remindersEnabled,
+    },
     memberships: memberships.map((m) => ({
       id: m.id,
       workshopId: m.workshopId,
@@ -90,4 +100,31 @@ export async function signIn(body: SignInRequest): Promise<string> {
   if (!(await verifyPassword(body.password, user.passwordHash)))
     throw unauthenticated(WRONG_CREDENTIALS);
   return user.id;
+}
+
+/**
+ * The signed-in person's own preferences. Not a workshop record, so the audit entry has no
+ * workshop; it still says who changed what.
+ */
+export async function updatePreferences(
+  userId: string,
+  body: UpdatePreferencesRequest,
+): Promise<void> {
+  const sequelize = User.sequelize!;
+  await sequelize.transaction(async (transaction: Transaction) => {
+    const user = await User.findByPk(userId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!user)
+      throw unauthenticated('Your account no longer exists. Sign up or ask for a new invitation.');
+    if (user.remindersEnabled === body.remindersEnabled) return;
+    await user.update({ remindersEnabled: body.remindersEnabled }, { transaction });
+    await audit(transaction, {
+      workshopId: null,
+      actorId: user.id,
+      action: 'user.preferences',
+      entityType: 'user',
+      entityId: user.id,
+      summary: `${user.name} turned reminder e-mails ${body.remindersEnabled ? 'on' : 'off'}`,
+      changes: { remindersEnabled: { from: !body.remindersEnabled, to: body.remindersEnabled } },
+    });
+  });
 }

@@ -1,12 +1,14 @@
 import type { Transaction } from 'sequelize';
 import type { z } from 'zod';
 import {
+  mergeTreatmentSettings,
   mergeWoodSettings,
   workshopSettings,
   type updateWorkshopRequest,
   type WorkshopResponse,
   type WorkshopSettings,
 } from '@/shared/schemas/workshop';
+import { DEFAULT_TREATMENT_SETTINGS } from '@/shared/treatments/settings';
 import { DEFAULT_WOOD_SETTINGS } from '@/shared/wood/settings';
 import { badRequest, notFound } from '../errors';
 import { zodFields } from '../middleware/error-handler';
@@ -18,23 +20,25 @@ type UpdateWorkshop = z.infer<typeof updateWorkshopRequest>;
 
 /**
  * The full settings of a workshop. Settings saved before a field existed read back with that
- * field's default, down to single keys inside `wood`.
+ * field's default, down to single keys inside `wood` and `treatments`.
  */
 export function readSettings(stored: Partial<WorkshopSettings> | null | undefined) {
   const saved = stored ?? {};
   return workshopSettings.parse({
     ...saved,
     wood: mergeWoodSettings(DEFAULT_WOOD_SETTINGS, saved.wood),
+    treatments: mergeTreatmentSettings(DEFAULT_TREATMENT_SETTINGS, saved.treatments),
   });
 }
 
-/** Flat keys for the audit diff, one per wood group, so an entry names what changed. */
+/** Flat keys for the audit diff, one per wood or treatment group, so an entry names what changed. */
 function auditView(name: string, s: WorkshopSettings): Record<string, unknown> {
-  const { wood, ...flat } = s;
+  const { wood, treatments, ...flat } = s;
   return {
     name,
     ...flat,
     ...Object.fromEntries(Object.entries(wood).map(([k, v]) => [`wood.${k}`, v])),
+    ...Object.fromEntries(Object.entries(treatments).map(([k, v]) => [`treatments.${k}`, v])),
   };
 }
 
@@ -49,8 +53,8 @@ export async function getWorkshop(member: MemberContext): Promise<WorkshopRespon
 }
 
 /**
- * Renames the workshop and/or merges the given settings into the saved ones; `wood` is merged
- * key by key at every depth, then the whole is validated.
+ * Renames the workshop and/or merges the given settings into the saved ones; `wood` and
+ * `treatments` are merged key by key at every depth, then the whole is validated.
  */
 export async function updateWorkshop(
   member: MemberContext,
@@ -64,11 +68,12 @@ export async function updateWorkshop(
     });
     if (!w) throw notFound('Workshop');
     const current = readSettings(w.settings);
-    const { wood: woodPatch, ...flat } = body.settings ?? {};
+    const { wood: woodPatch, treatments: treatmentsPatch, ...flat } = body.settings ?? {};
     const parsed = workshopSettings.safeParse({
       ...current,
       ...flat,
       wood: mergeWoodSettings(current.wood, woodPatch),
+      treatments: mergeTreatmentSettings(current.treatments, treatmentsPatch),
     });
     if (!parsed.success)
       throw badRequest(

@@ -39,6 +39,8 @@ export const userSummary = z.object({
   id: uuid,
   name: z.string(),
   email: z.string(),
+  /** Whether the reminder job e-mails this person a digest of their due re-checks. */
+  remindersEnabled: z.boolean().optional(),
 });
 export type UserSummary = z.infer<typeof userSummary>;
 
@@ -54,6 +56,12 @@ export const sessionResponse = z.object({
   token: z.string().optional(),
 });
 export type SessionResponse = z.infer<typeof sessionResponse>;
+
+/** PATCH /api/auth/preferences: the signed-in person's own settings; answers like GET session. */
+export const updatePreferencesRequest = z.object({
+  remindersEnabled: z.boolean(),
+});
+export type UpdatePreferencesRequest = z.infer<typeof updatePreferencesRequest>;
 
 export const invitationPreview = z.object({
   workshopName: z.string(),

@@ -5,3 +5,5 @@ export * from './vehicle';
 export * from './survey';
 export * from './finding';
 export * from './decision';
+export * from './treatment';
+export * from './recheck';

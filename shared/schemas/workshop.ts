@@ -1,6 +1,14 @@
 import { z } from 'zod';
 import { ROLES } from '../roles';
 import {
+  clearanceRuleSchema,
+  DEFAULT_TREATMENT_SETTINGS,
+  PLAN_GROUPS,
+  treatmentSettingsSchema,
+  type PlanGroup,
+  type TreatmentSettings,
+} from '../treatments/settings';
+import {
   DEFAULT_WOOD_SETTINGS,
   verdictRulesSchema,
   woodSettingsSchema,
@@ -24,6 +32,7 @@ export const workshopSettings = z.object({
   labourRatePerHour: settingsFields.labourRatePerHour.default(0),
   currency: settingsFields.currency.default('EUR'),
   wood: woodSettingsSchema.default(() => structuredClone(DEFAULT_WOOD_SETTINGS)),
+  treatments: treatmentSettingsSchema.default(() => structuredClone(DEFAULT_TREATMENT_SETTINGS)),
 });
 export type WorkshopSettings = z.infer<typeof workshopSettings>;
 
@@ -45,6 +54,25 @@ export const woodSettingsPatch = z
   .partial();
 export type WoodSettingsPatch = z.infer<typeof woodSettingsPatch>;
 
+const treatments = treatmentSettingsSchema.shape;
+
+/** A PATCH of the treatment settings: any subset; a plan's list of days is replaced whole. */
+export const treatmentSettingsPatch = z
+  .object({
+    recheckPlans: z
+      .object(
+        Object.fromEntries(PLAN_GROUPS.map((g) => [g, treatments.recheckPlans.shape[g]])) as {
+          [G in PlanGroup]: (typeof treatments.recheckPlans.shape)[G];
+        },
+      )
+      .partial(),
+    clearance: clearanceRuleSchema.partial(),
+    timeZone: treatments.timeZone,
+    regulatoryNotes: treatments.regulatoryNotes,
+  })
+  .partial();
+export type TreatmentSettingsPatch = z.infer<typeof treatmentSettingsPatch>;
+
 const isPlainObject = (v: unknown): v is Record<string, unknown> =>
   typeof v === 'object' && v !== null && !Array.isArray(v);
 
@@ -64,6 +92,14 @@ export function mergeWoodSettings(base: WoodSettings, patch: unknown): unknown {
   return deepMerge(base, patch);
 }
 
+/**
+ * Treatment settings with `patch` laid over `base` key by key (not validated: parse the result
+ * with treatmentSettingsSchema). Fills a saved value from before a key existed with its default.
+ */
+export function mergeTreatmentSettings(base: TreatmentSettings, patch: unknown): unknown {
+  return deepMerge(base, patch);
+}
+
 export const workshopResponse = z.object({
   id: uuid,
   name: z.string(),
@@ -76,7 +112,7 @@ export const updateWorkshopRequest = z.object({
   name: z.string().trim().min(2).max(120).optional(),
   // No defaults here: a key left out keeps its saved value (defaults would overwrite it).
   settings: z
-    .object({ ...settingsFields, wood: woodSettingsPatch })
+    .object({ ...settingsFields, wood: woodSettingsPatch, treatments: treatmentSettingsPatch })
     .partial()
     .optional(),
 });

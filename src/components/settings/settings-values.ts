@@ -2,6 +2,7 @@ import { SPECIES_KEYS, type SpeciesKey } from '@/shared/body-plans';
 import { workshopSettings, type WorkshopSettings } from '@/shared/schemas';
 import { DEFAULT_WOOD_SETTINGS, VERDICT_OPTIONS, type VerdictOption } from '@/shared/wood';
 import { parseNumber } from '@/src/components/findings/form-values';
+import { DEFAULT_TREATMENT_SETTINGS } from '@/shared/treatments';
 
 /** What the settings form edits: numbers stay text, shares of a member are whole percent. */
 export type SettingsFormValues = {
@@ -62,6 +63,7 @@ export function withWoodDefaults(values: SettingsFormValues): SettingsFormValues
     currency: values.currency,
     labourRatePerHour: 0,
     wood: DEFAULT_WOOD_SETTINGS,
+    treatments: DEFAULT_TREATMENT_SETTINGS,
   });
   return { ...defaults, labourRatePerHour: values.labourRatePerHour };
 }
