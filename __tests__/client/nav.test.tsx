@@ -105,8 +105,8 @@ const outboxOn = () => (answers['/api/dev/outbox'] = { status: 200, body: { item
 describe('navigation entries', () => {
   it('follows the role table: team for members.read roles, never for clients', () => {
     const keys = (role: Role, outbox: boolean) => navItemsFor(role, outbox).map((i) => i.key);
-    expect(keys('owner', true)).toEqual(['vehicles', 'team', 'mail', 'settings', 'account']);
-    expect(keys('applicator', false)).toEqual(['vehicles', 'team', 'settings', 'account']);
+    expect(keys('owner', true)).toEqual(['due', 'vehicles', 'team', 'mail', 'settings', 'account']);
+    expect(keys('applicator', false)).toEqual(['due', 'vehicles', 'team', 'settings', 'account']);
     expect(keys('client', true)).toEqual(['vehicles', 'mail', 'account']);
     expect(keys('client', false)).toEqual(['vehicles', 'account']);
   });

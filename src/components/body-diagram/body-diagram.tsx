@@ -13,6 +13,7 @@ import { DiagramZone, type ZoneGeometry } from './diagram-zone';
 import { HatchDefs, svgIdPrefix } from './hatch';
 import { pressPoint } from './press-point';
 import type { ViewPoint } from './view-point';
+import { zoneStateLabel, type ZoneStateCue } from './zone-state';
 import { zoneAccessibilityLabel, type DiagramPin, type ZoneSummary } from './zone-summary';
 
 export type BodyDiagramProps = {
@@ -21,6 +22,10 @@ export type BodyDiagramProps = {
   zoneSummaries: Record<string, ZoneSummary>;
   pins: DiagramPin[];
   selectedZone?: string;
+  /** Several chosen zones at once (picking the zones a treatment covered). */
+  selectedZones?: readonly string[];
+  /** Treatment state per zone, drawn as an outline pattern and a short word. */
+  zoneStates?: Record<string, ZoneStateCue>;
   /** `point` is where the zone was pressed, in view units (absent for keyboard presses). */
   onZonePress(zoneKey: string, point?: ViewPoint): void;
   /** Cap on the drawn height, px; the drawing shrinks to fit, keeping its proportions. */
@@ -42,6 +47,8 @@ export function BodyDiagram({
   zoneSummaries,
   pins,
   selectedZone,
+  selectedZones,
+  zoneStates,
   onZonePress,
   maxHeight = 520,
   width: fixedWidth,
@@ -59,13 +66,17 @@ export function BodyDiagram({
   const unit = 1 / scale;
 
   const geometry = useMemo(() => zoneGeometry(view), [view]);
-  // The selected zone is drawn last so its outline is not covered by its neighbours.
+  const isSelected = useCallback(
+    (key: string) => key === selectedZone || !!selectedZones?.includes(key),
+    [selectedZone, selectedZones],
+  );
+  // Selected zones are drawn last so their outlines are not covered by their neighbours.
   const ordered = useMemo(
     () => [
-      ...geometry.filter((z) => z.key !== selectedZone),
-      ...geometry.filter((z) => z.key === selectedZone),
+      ...geometry.filter((z) => !isSelected(z.key)),
+      ...geometry.filter((z) => isSelected(z.key)),
     ],
-    [geometry, selectedZone],
+    [geometry, isSelected],
   );
 
   const handlePress = useCallback(
@@ -112,11 +123,14 @@ export function BodyDiagram({
             key={z.key}
             zone={z}
             summary={zoneSummaries[z.key]}
-            accessibilityLabel={zoneAccessibilityLabel(
-              getZone(plan, z.key)?.label ?? z.key,
-              zoneSummaries[z.key],
-            )}
-            selected={z.key === selectedZone}
+            accessibilityLabel={[
+              zoneAccessibilityLabel(getZone(plan, z.key)?.label ?? z.key, zoneSummaries[z.key]),
+              zoneStateLabel(zoneStates?.[z.key]),
+            ]
+              .filter(Boolean)
+              .join(', ')}
+            stateCue={zoneStates?.[z.key]}
+            selected={isSelected(z.key)}
             hovered={z.key === hovered}
             unit={unit}
             idPrefix={idPrefix}

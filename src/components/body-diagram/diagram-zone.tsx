@@ -3,6 +3,7 @@ import { Platform } from 'react-native';
 import { Circle, G, Polygon, Text as SvgText } from 'react-native-svg';
 import { colors, fonts, severityFill, severityInk, unloggedFill } from '@/src/theme';
 import { HATCHED, hatchId } from './hatch';
+import { ZONE_STATE_DASH, ZONE_STATE_SHORT, type ZoneStateCue } from './zone-state';
 import type { ZoneSummary } from './zone-summary';
 
 export type ZoneGeometry = {
@@ -17,6 +18,7 @@ type Props = {
   zone: ZoneGeometry;
   summary: ZoneSummary | undefined;
   accessibilityLabel: string;
+  stateCue?: ZoneStateCue;
   selected: boolean;
   hovered: boolean;
   /** One screen pixel in drawing units. */
@@ -34,6 +36,7 @@ export const DiagramZone = memo(function DiagramZone({
   zone,
   summary,
   accessibilityLabel,
+  stateCue,
   selected,
   hovered,
   unit,
@@ -48,6 +51,13 @@ export const DiagramZone = memo(function DiagramZone({
   const hatch =
     severity !== null && HATCHED[severity] ? `url(#${hatchId(idPrefix, severity)})` : null;
   const r = 10 * unit;
+  const dash = stateCue ? ZONE_STATE_DASH[stateCue.state] : null;
+  const word = stateCue
+    ? stateCue.flagged
+      ? `! ${ZONE_STATE_SHORT[stateCue.state] ?? ''}`.trim()
+      : ZONE_STATE_SHORT[stateCue.state]
+    : null;
+  const wordY = zone.labelAt[1] + (severity !== null ? r + 11 * unit : 4 * unit);
 
   return (
     <G
@@ -69,6 +79,40 @@ export const DiagramZone = memo(function DiagramZone({
       ))}
       {hatch
         ? zone.polygons.map((points, i) => <Polygon key={`h${i}`} points={points} fill={hatch} />)
+        : null}
+      {dash
+        ? zone.polygons.map((points, i) => (
+            <Polygon
+              key={`s${i}`}
+              points={points}
+              fill="none"
+              stroke={colors.ink}
+              strokeWidth={2.5 * unit}
+              strokeDasharray={dash.length ? dash.map((d) => d * unit).join(' ') : undefined}
+              strokeLinecap="round"
+              strokeLinejoin="round"
+            />
+          ))
+        : null}
+      {word
+        ? // Drawn twice: a paper-coloured halo first so the word reads over any fill or hatch.
+          [true, false].map((halo) => (
+            <SvgText
+              key={halo ? 'halo' : 'word'}
+              testID={halo ? undefined : `zone-state-${zone.key}`}
+              x={zone.labelAt[0]}
+              y={wordY}
+              textAnchor="middle"
+              fontSize={9 * unit}
+              fontFamily={fonts.bold}
+              fontWeight="bold"
+              fill={colors.ink}
+              stroke={halo ? colors.surface : undefined}
+              strokeWidth={halo ? 3 * unit : undefined}
+            >
+              {word}
+            </SvgText>
+          ))
         : null}
       {severity !== null ? (
         <G>

@@ -9,3 +9,10 @@ export {
   type DiagramPin,
 } from './zone-summary';
 export type { ViewPoint } from './view-point';
+export {
+  FLAGGED_LABEL,
+  ZONE_STATE_LABELS,
+  zoneStateLabel,
+  type ZoneStateCue,
+  type ZoneStateKey,
+} from './zone-state';

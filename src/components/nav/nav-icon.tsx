@@ -26,6 +26,14 @@ export function NavIcon({
       accessibilityElementsHidden
       importantForAccessibility="no"
     >
+      {name === 'due' ? (
+        <>
+          {/* A calendar page with a tick: the day's re-checks. */}
+          <Rect x={3.5} y={5} width={17} height={15} rx={2} {...stroke} />
+          <Path d="M3.5 9.5 H20.5 M8 3 V6.5 M16 3 V6.5" {...stroke} />
+          <Path d="M8.5 14.5 L11 17 L15.5 12.5" {...stroke} />
+        </>
+      ) : null}
       {name === 'vehicles' ? (
         <>
           <Path d="M2 16 V12 L5 11 L8 7 H15 L19 11 L22 12 V16 Z" {...stroke} />

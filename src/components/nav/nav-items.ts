@@ -1,13 +1,15 @@
 import { can, type Role } from '@/shared/roles';
 
-export type NavKey = 'vehicles' | 'team' | 'mail' | 'settings' | 'account';
+export type NavKey = 'due' | 'vehicles' | 'team' | 'mail' | 'settings' | 'account';
 export type NavItem = {
   key: NavKey;
   label: string;
-  href: '/vehicles' | '/members' | '/outbox' | '/settings' | '/account';
+  href: '/due' | '/vehicles' | '/members' | '/outbox' | '/settings' | '/account';
 };
 
+// "Due" comes first: on a phone it is where a technician starts the day.
 const ALL: NavItem[] = [
+  { key: 'due', label: 'Due', href: '/due' },
   { key: 'vehicles', label: 'Vehicles', href: '/vehicles' },
   { key: 'team', label: 'Team', href: '/members' },
   { key: 'mail', label: 'Mail', href: '/outbox' },
@@ -21,6 +23,7 @@ const ALL: NavItem[] = [
  */
 export function navItemsFor(role: Role, outboxAvailable: boolean): NavItem[] {
   return ALL.filter((item) => {
+    if (item.key === 'due') return can(role, 'rechecks.write');
     if (item.key === 'vehicles') return can(role, 'vehicles.read');
     if (item.key === 'team') return can(role, 'members.read');
     if (item.key === 'mail') return outboxAvailable;
@@ -33,6 +36,7 @@ export function navItemsFor(role: Role, outboxAvailable: boolean): NavItem[] {
 
 /** Which entry a path belongs to ('/' is the vehicles list). */
 export function activeNavKey(pathname: string): NavKey | null {
+  if (pathname.startsWith('/due')) return 'due';
   if (pathname === '/' || pathname.startsWith('/vehicles')) return 'vehicles';
   if (pathname.startsWith('/members')) return 'team';
   if (pathname.startsWith('/outbox')) return 'mail';

@@ -6,6 +6,7 @@ import {
   type StructuralClass,
 } from '@/shared/body-plans';
 import type { DecisionResponse, FindingResponse } from '@/shared/schemas';
+import { FLAGGED_LABEL, ZONE_STATE_LABELS, type ZoneStateCue } from '@/src/components/body-diagram';
 import { DecisionSummary } from '@/src/components/decisions/decision-summary';
 import { speciesLabel } from '@/src/components/findings/labels';
 import { FindingCard } from '@/src/components/findings/finding-card';
@@ -16,6 +17,13 @@ const CLASS_TONES: Record<StructuralClass, BadgeTone> = {
   primary: 'danger',
   secondary: 'caution',
   'non-structural': 'neutral',
+};
+const STATE_TONES: Record<ZoneStateCue['state'], BadgeTone> = {
+  'no-evidence': 'neutral',
+  active: 'danger',
+  'treated-watching': 'caution',
+  cleared: 'ok',
+  'old-damage': 'neutral',
 };
 const SIDE_LABELS = { left: 'Left side', right: 'Right side', centre: 'Centre line' } as const;
 
@@ -34,6 +42,10 @@ type Props = {
   /** Shows "Decide the repair" to roles that make member decisions. */
   canDecide: boolean;
   onDecide(): void;
+  /** The zone's treatment state, derived on the server from the records. */
+  zoneState?: ZoneStateCue;
+  /** Shown as "Record a treatment" to roles that may record one. */
+  onRecordTreatment?: () => void;
   onLogFinding(): void;
   onEditFinding(finding: FindingResponse): void;
   onOpenHistory(): void;
@@ -51,6 +63,8 @@ export function ZoneSheet({
   currency,
   canDecide,
   onDecide,
+  zoneState,
+  onRecordTreatment,
   onLogFinding,
   onEditFinding,
   onOpenHistory,
@@ -107,11 +121,38 @@ export function ZoneSheet({
         </AppText>
       </View>
 
+      {zoneState && zoneState.state !== 'no-evidence' ? (
+        <View
+          style={[styles.state, zoneState.flagged && styles.stateFlagged]}
+          testID="zone-sheet-state"
+        >
+          <Badge
+            label={ZONE_STATE_LABELS[zoneState.state]}
+            tone={STATE_TONES[zoneState.state]}
+            testID="zone-sheet-state-label"
+          />
+          {zoneState.flagged ? (
+            <AppText variant="label" style={styles.flagText} testID="zone-sheet-flagged">
+              {FLAGGED_LABEL}
+            </AppText>
+          ) : null}
+          {zoneState.reason ? <AppText variant="caption">{zoneState.reason}</AppText> : null}
+        </View>
+      ) : null}
+
       {decision ? <DecisionSummary decision={decision} currency={currency} /> : null}
 
       <View style={styles.actions}>
         {canLog ? (
           <Button label="Log a finding" onPress={onLogFinding} testID="zone-log-finding" />
+        ) : null}
+        {onRecordTreatment ? (
+          <Button
+            label="Record a treatment"
+            variant="secondary"
+            onPress={onRecordTreatment}
+            testID="zone-record-treatment"
+          />
         ) : null}
         {canDecide ? (
           <Button
@@ -158,4 +199,14 @@ const styles = StyleSheet.create({
   facts: { gap: spacing.xs },
   status: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, flexWrap: 'wrap' },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  state: {
+    gap: spacing.xs,
+    padding: spacing.sm,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
+  stateFlagged: { borderWidth: 2, borderColor: colors.danger, borderLeftWidth: 6 },
+  flagText: { color: colors.danger },
 });

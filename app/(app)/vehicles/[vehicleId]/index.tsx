@@ -3,6 +3,7 @@ import { useCallback, useMemo, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import {
   getBodyPlan,
+  getZone,
   polygonCentroid,
   VIEW_KEYS,
   type BodyPlan,
@@ -12,6 +13,8 @@ import { can } from '@/shared/roles';
 import type { FindingResponse } from '@/shared/schemas';
 import { useDecisions } from '@/src/api/decisions';
 import { useFindings } from '@/src/api/findings';
+import { useVehicleRechecks } from '@/src/api/rechecks';
+import { useZoneStates } from '@/src/api/treatments';
 import { useSurveys } from '@/src/api/surveys';
 import { useVehicle } from '@/src/api/vehicles';
 import { useWorkshopSettings } from '@/src/api/workshops';
@@ -34,6 +37,8 @@ import {
   Screen,
 } from '@/src/components/ui';
 import { vehicleTitle } from '@/src/components/vehicles/vehicle-labels';
+import { VehicleRechecks } from '@/src/components/rechecks/vehicle-rechecks';
+import { zoneStateMap } from '@/src/components/treatments/zone-state-map';
 import { ZoneSheet } from '@/src/components/zone-sheet';
 import { useBreakpoint } from '@/src/hooks/use-breakpoint';
 import { useRole, useWorkshopId } from '@/src/hooks/use-session';
@@ -53,6 +58,9 @@ export default function VehicleOverview() {
   const findings = useFindings(wid, vehicleId);
   const decisions = useDecisions(wid, vehicleId);
   const settings = useWorkshopSettings(wid);
+  const zoneStateList = useZoneStates(wid, vehicleId);
+  const rechecks = useVehicleRechecks(wid, vehicleId);
+  const zoneStates = useMemo(() => zoneStateMap(zoneStateList.data), [zoneStateList.data]);
   const [surveyFilter, setSurveyFilter] = useState('all');
   const [view, setView] = useState<ViewKey | null>(isViewKey(params.view) ? params.view : null);
   const [selected, setSelected] = useState<Selection | null>(
@@ -91,6 +99,12 @@ export default function VehicleOverview() {
   const canFindings = can(role, 'findings.write');
   const targetSurvey = surveyFilter !== 'all' ? surveyFilter : sorted[0]?.id;
   const startSurvey = () => router.push(`/vehicles/${vehicleId}/surveys/new`);
+  const canTreat = can(role, 'treatments.write');
+  const recordTreatment = (zone?: string) =>
+    router.push({
+      pathname: '/vehicles/[vehicleId]/treatments/new',
+      params: zone ? { vehicleId, zone } : { vehicleId },
+    });
 
   function logFinding(zone: string) {
     if (!targetSurvey) return setAskSurvey(true);
@@ -129,6 +143,8 @@ export default function VehicleOverview() {
             params: { vehicleId, zoneKey: selected.zone },
           })
         }
+        zoneState={zoneStates[selected.zone]}
+        onRecordTreatment={canTreat ? () => recordTreatment(selected.zone) : undefined}
         onLogFinding={() => logFinding(selected.zone)}
         onEditFinding={editFinding}
         onOpenHistory={() =>
@@ -155,15 +171,33 @@ export default function VehicleOverview() {
       maxWidth={wide ? 1400 : 880}
       testID="vehicle-overview"
       actions={
-        can(role, 'vehicles.write') ? (
+        <View style={styles.actions}>
+          {canTreat ? (
+            <Button
+              label="Record a treatment"
+              variant="secondary"
+              compact
+              onPress={() => recordTreatment()}
+              testID="vehicle-record-treatment"
+            />
+          ) : null}
           <Button
-            label="Edit vehicle"
+            label="Timeline"
             variant="secondary"
             compact
-            onPress={() => router.push(`/vehicles/${vehicleId}/edit`)}
-            testID="vehicle-edit"
+            onPress={() => router.push(`/vehicles/${vehicleId}/timeline`)}
+            testID="vehicle-timeline"
           />
-        ) : null
+          {can(role, 'vehicles.write') ? (
+            <Button
+              label="Edit vehicle"
+              variant="secondary"
+              compact
+              onPress={() => router.push(`/vehicles/${vehicleId}/edit`)}
+              testID="vehicle-edit"
+            />
+          ) : null}
+        </View>
       }
     >
       <VehicleFacts vehicle={v} plan={plan} findings={findings.data ?? []} />
@@ -205,12 +239,20 @@ export default function VehicleOverview() {
               onZonePress={onZonePress}
               maxHeight={wide ? 560 : 420}
               canLog={canFindings}
+              zoneStates={zoneStates}
             />
             {findings.isPending ? <AppText muted>Loading findings…</AppText> : null}
           </View>
           <View style={wide ? styles.sheetWide : undefined}>{sheet}</View>
         </View>
       )}
+      {plan && rechecks.data ? (
+        <VehicleRechecks
+          vehicleId={vehicleId}
+          rechecks={rechecks.data}
+          zoneLabel={(k) => getZone(plan, k)?.label ?? k}
+        />
+      ) : null}
       <ConfirmDialog
         visible={askSurvey}
         title="Start a survey first"
@@ -240,6 +282,7 @@ function centroidIn(plan: BodyPlan, view: ViewKey, zone: string): ViewPoint | un
 }
 
 const styles = StyleSheet.create({
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   split: { gap: spacing.lg },
   splitWide: { flexDirection: 'row', alignItems: 'flex-start' },
   diagramWide: { flex: 3, minWidth: 0 },

@@ -7,6 +7,7 @@ import {
   ViewSwitcher,
   type DiagramPin,
   type ViewPoint,
+  type ZoneStateCue,
   type ZoneSummary,
 } from '@/src/components/body-diagram';
 import { AppText, Button } from '@/src/components/ui';
@@ -26,6 +27,7 @@ export function DiagramPanel({
   onZonePress,
   maxHeight,
   canLog,
+  zoneStates,
 }: {
   plan: BodyPlan;
   view: ViewKey;
@@ -36,6 +38,7 @@ export function DiagramPanel({
   onZonePress(zoneKey: string, point?: ViewPoint): void;
   maxHeight?: number;
   canLog: boolean;
+  zoneStates?: Record<string, ZoneStateCue>;
 }) {
   const [zoomed, setZoomed] = useState(false);
   const [width, setWidth] = useState(0);
@@ -47,6 +50,7 @@ export function DiagramPanel({
       zoneSummaries={zoneSummaries}
       pins={pins}
       selectedZone={selectedZone}
+      zoneStates={zoneStates}
       onZonePress={onZonePress}
       maxHeight={zoomed && maxHeight ? maxHeight * ZOOM : maxHeight}
       width={zoomed && width ? width * ZOOM : undefined}
@@ -81,6 +85,13 @@ export function DiagramPanel({
         )}
       </View>
       <DiagramLegend />
+      {zoneStates && Object.values(zoneStates).some((z) => z.state !== 'no-evidence') ? (
+        <AppText variant="caption" muted testID="zone-state-legend">
+          Words under a zone give its treatment state: ACTIVE (solid outline), WATCH = treated,
+          watching (dashed), CLEAR = cleared (dotted), OLD = old damage (dash-dot). “!” marks a
+          possible treatment failure.
+        </AppText>
+      ) : null}
     </View>
   );
 }

@@ -1,0 +1,96 @@
+import { format } from 'date-fns';
+import { StyleSheet, View } from 'react-native';
+import { getZone, type BodyPlan } from '@/shared/body-plans';
+import { TREATMENT_METHOD_LABELS, type TreatmentResponse } from '@/shared/schemas/treatment';
+import { AGENT_LABELS } from '@/shared/wood';
+import { AppText, Card } from '@/src/components/ui';
+import { colors, spacing } from '@/src/theme';
+
+/** What was applied, where and under which label; earlier versions listed with their reasons. */
+export function TreatmentDetails({
+  treatment: t,
+  plan,
+}: {
+  treatment: TreatmentResponse;
+  plan?: BodyPlan;
+}) {
+  const zones = t.zoneKeys.map((k) => (plan && getZone(plan, k)?.label) || k).join(', ');
+  const rows: [string, string][] = [
+    ['Applied', format(new Date(t.appliedAt), 'd MMM yyyy, HH:mm')],
+    ['Applied by', t.applicatorName + (t.licenceNumber ? ` (licence ${t.licenceNumber})` : '')],
+    ['Zones', zones],
+    ['Product', t.productName],
+    ['Registration number', t.registrationNumber],
+    ['Active ingredient', `${t.activeIngredient}, ${t.concentration}`],
+    ['Formulation', t.formulation || '—'],
+    ['Dilution as mixed', t.dilution || '—'],
+    ['Method', TREATMENT_METHOD_LABELS[t.method]],
+    ['Aimed at', t.targetAgent === 'unknown' ? 'Not known' : AGENT_LABELS[t.targetAgent]],
+    ['Quantity used', `${t.quantity.amount} ${t.quantity.unit}`],
+    ['Area or length', t.areaTreated || '—'],
+    ['Ventilation', t.ventilation || '—'],
+    ['Re-entry time', `${t.reentryHours} h`],
+    ['Protective equipment', t.ppe.join(', ')],
+    [
+      'Conditions',
+      [
+        t.conditions.airTempC !== null ? `air ${t.conditions.airTempC} °C` : null,
+        t.conditions.woodMoisturePercent !== null
+          ? `wood ${t.conditions.woodMoisturePercent} %`
+          : null,
+      ]
+        .filter(Boolean)
+        .join(', ') || '—',
+    ],
+    ['Notes', t.notes || '—'],
+    ['Recorded by', `${t.recordedByName ?? 'Unknown'}, version ${t.version}`],
+  ];
+  return (
+    <View style={styles.wrap} testID="treatment-details">
+      <Card>
+        {rows.map(([label, value]) => (
+          <View key={label} style={styles.row}>
+            <AppText variant="caption" muted style={styles.label}>
+              {label}
+            </AppText>
+            <AppText style={styles.value}>{value}</AppText>
+          </View>
+        ))}
+      </Card>
+      {t.versions.length ? (
+        <View style={styles.wrap} testID="treatment-versions">
+          <AppText variant="title" accessibilityRole="header">
+            Earlier versions
+          </AppText>
+          {t.versions.map((v) => (
+            <Card key={v.version}>
+              <AppText variant="label">
+                Version {v.version}, replaced {format(new Date(v.changedAt), 'd MMM yyyy')} by{' '}
+                {v.changedByName ?? 'unknown'}
+              </AppText>
+              <AppText variant="caption">Reason: {v.reason}</AppText>
+              <AppText variant="caption" muted>
+                {v.data.productName} ({v.data.registrationNumber}), {v.data.activeIngredient}{' '}
+                {v.data.concentration}
+              </AppText>
+            </Card>
+          ))}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.md },
+  row: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    gap: spacing.md,
+    paddingVertical: spacing.xs,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+  },
+  label: { width: 150 },
+  value: { flex: 1, minWidth: 160 },
+});
