@@ -546,8 +546,12 @@ async function seed(
       );
     }
     const { notAccessible, ...surveyFields } = demo.survey;
+    // Recorded on the day of the survey, so later treatments and re-checks come after it.
+    const recordedAt = new Date(`${demo.survey.date}T10:00:00Z`);
     const survey = await Survey.create(
       {
+        createdAt: recordedAt,
+        updatedAt: recordedAt,
         ...surveyFields,
         purpose: 'baseline',
         workshopId: workshop.id,
@@ -593,6 +597,8 @@ async function seed(
           vehicleId: vehicle.id,
           surveyId: survey.id,
           authorId: people.inspector.id,
+          createdAt: recordedAt,
+          updatedAt: recordedAt,
         },
         { transaction },
       );

@@ -1,11 +1,12 @@
-import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { SPECIES_KEYS } from '@/shared/body-plans';
 import { VERDICT_OPTIONS } from '@/shared/wood';
 import { SPECIES_LABELS } from '@/src/components/findings/labels';
 import { AppText, Checkbox, SegmentedControl, TextField } from '@/src/components/ui';
 import { OPTION_LABELS } from '@/src/components/wood/labels';
-import { colors, spacing } from '@/src/theme';
+import { spacing } from '@/src/theme';
+import { Cell, Section } from './settings-section';
+import { TreatmentSettingsSection } from './treatment-settings-section';
 import type { SettingsErrors, SettingsFormValues } from './settings-values';
 
 const unitOptions = [
@@ -21,7 +22,7 @@ type Props = {
   errors: SettingsErrors;
 };
 
-/** The owner's settings: units and rates, the verdict thresholds, splices, hours and timber. */
+/** The owner's settings: units and rates, the wood verdicts and costs, treatments and re-checks. */
 export function SettingsForm({ values, onChange, errors }: Props) {
   const money = values.currency || '¤';
   return (
@@ -58,14 +59,6 @@ export function SettingsForm({ values, onChange, errors }: Props) {
             />
           </Cell>
         </View>
-        <TextField
-          label="Region"
-          hint="Where the workshop works; reports use it for notes on local rules."
-          value={values.region}
-          onChangeText={(region) => onChange({ region })}
-          error={errors['settings.region']}
-          testID="settings-region"
-        />
       </Section>
 
       <Section
@@ -179,44 +172,13 @@ export function SettingsForm({ values, onChange, errors }: Props) {
           ))}
         </View>
       </Section>
+
+      <TreatmentSettingsSection values={values} onChange={onChange} errors={errors} />
     </View>
   );
-}
-
-function Section({
-  title,
-  subtitle,
-  children,
-  testID,
-}: {
-  title: string;
-  subtitle?: string;
-  children: ReactNode;
-  testID?: string;
-}) {
-  return (
-    <View style={styles.section} testID={testID}>
-      <AppText variant="title" accessibilityRole="header">
-        {title}
-      </AppText>
-      {subtitle ? <AppText muted>{subtitle}</AppText> : null}
-      {children}
-    </View>
-  );
-}
-
-function Cell({ children }: { children: ReactNode }) {
-  return <View style={styles.cell}>{children}</View>;
 }
 
 const styles = StyleSheet.create({
   form: { gap: spacing.xl },
-  section: {
-    gap: spacing.md,
-    paddingTop: spacing.lg,
-    borderTopWidth: 1,
-    borderTopColor: colors.line,
-  },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
-  cell: { flexGrow: 1, flexBasis: 200, minWidth: 0 },
 });

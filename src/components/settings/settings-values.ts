@@ -1,8 +1,8 @@
 import { SPECIES_KEYS, type SpeciesKey } from '@/shared/body-plans';
 import { workshopSettings, type WorkshopSettings } from '@/shared/schemas';
 import { DEFAULT_WOOD_SETTINGS, VERDICT_OPTIONS, type VerdictOption } from '@/shared/wood';
+import { DEFAULT_TREATMENT_SETTINGS, PLAN_GROUPS, type PlanGroup } from '@/shared/treatments';
 import { parseNumber } from '@/src/components/findings/form-values';
-import { DEFAULT_TREATMENT_SETTINGS } from '@/shared/treatments';
 
 /** What the settings form edits: numbers stay text, shares of a member are whole percent. */
 export type SettingsFormValues = {
@@ -19,12 +19,19 @@ export type SettingsFormValues = {
   hours: Record<VerdictOption, string>;
   prices: Record<SpeciesKey, string>;
   wastePercent: string;
+  regulatoryNotes: string;
+  cleanChecksRequired: string;
+  minSpanDays: string;
+  /** Days after the treatment, as the owner types them: "14, 42, 90". */
+  plans: Record<PlanGroup, string>;
+  timeZone: string;
 };
 
 /** Error messages keyed by request path ("settings.wood.scarfSlope"). */
 export type SettingsErrors = Record<string, string>;
 
 const RULES = 'settings.wood.verdictRules';
+export const PLANS = 'settings.treatments.recheckPlans';
 /** Request path of each ratio shown as a percent. */
 const RATIO_PATHS = {
   keepPercent: `${RULES}.keepMinSectionModulusRatio`,
@@ -52,10 +59,22 @@ export function valuesFromSettings(s: WorkshopSettings): SettingsFormValues {
     hours: mapValues(s.wood.hoursPerOperation, String),
     prices: mapValues(s.wood.timberPricePerBoardFoot, String),
     wastePercent: String(s.wood.wasteFactorPercent),
+    regulatoryNotes: s.treatments.regulatoryNotes,
+    cleanChecksRequired: String(s.treatments.clearance.cleanChecksRequired),
+    minSpanDays: String(s.treatments.clearance.minSpanDays),
+    plans: mapValues(s.treatments.recheckPlans, (days) => days.join(', ')),
+    timeZone: s.treatments.timeZone,
   };
 }
 
-/** The form with every wood setting put back to the common practice defaults (units etc. kept). */
+/** The message beside a plan: a server or schema issue may point at one day in its list. */
+export function planError(errors: SettingsErrors, group: PlanGroup): string | undefined {
+  const path = `${PLANS}.${group}`;
+  const key = Object.keys(errors).find((k) => k === path || k.startsWith(`${path}.`));
+  return key ? errors[key] : undefined;
+}
+
+/** The form with every wood setting put back to the common practice defaults (the rest kept). */
 export function withWoodDefaults(values: SettingsFormValues): SettingsFormValues {
   const defaults = valuesFromSettings({
     units: values.units,
@@ -65,7 +84,17 @@ export function withWoodDefaults(values: SettingsFormValues): SettingsFormValues
     wood: DEFAULT_WOOD_SETTINGS,
     treatments: DEFAULT_TREATMENT_SETTINGS,
   });
-  return { ...defaults, labourRatePerHour: values.labourRatePerHour };
+  const { labourRatePerHour, regulatoryNotes, cleanChecksRequired, minSpanDays, plans, timeZone } =
+    values;
+  return {
+    ...defaults,
+    labourRatePerHour,
+    regulatoryNotes,
+    cleanChecksRequired,
+    minSpanDays,
+    plans,
+    timeZone,
+  };
 }
 
 /** The PATCH body's settings (the whole of them), or the message for each field that is off. */
@@ -84,6 +113,12 @@ export function buildSettings(values: SettingsFormValues): {
     const n = num(RATIO_PATHS[key], values[key]);
     if (!Number.isNaN(n) && (n < 0 || n > 100)) errors[RATIO_PATHS[key]] = 'Between 0 and 100 %';
     return n / 100;
+  };
+  const days = (group: PlanGroup): number[] => {
+    const parts = values.plans[group].split(',').map((p) => p.trim());
+    if (parts.every((p) => /^\d+$/.test(p))) return parts.map(Number);
+    errors[`${PLANS}.${group}`] = 'Whole days after the treatment, separated by commas';
+    return [];
   };
   const candidate = {
     units: values.units,
@@ -116,11 +151,25 @@ export function buildSettings(values: SettingsFormValues): {
       ),
       wasteFactorPercent: num('settings.wood.wasteFactorPercent', values.wastePercent),
     },
+    treatments: {
+      recheckPlans: Object.fromEntries(PLAN_GROUPS.map((g) => [g, days(g)])),
+      clearance: {
+        cleanChecksRequired: num(
+          'settings.treatments.clearance.cleanChecksRequired',
+          values.cleanChecksRequired,
+        ),
+        minSpanDays: num('settings.treatments.clearance.minSpanDays', values.minSpanDays),
+      },
+      timeZone: values.timeZone.trim(),
+      regulatoryNotes: values.regulatoryNotes,
+    },
   };
   const parsed = workshopSettings.safeParse(candidate);
   if (!parsed.success)
     for (const issue of parsed.error.issues) {
-      const path = ['settings', ...issue.path.map(String)].join('.');
+      // A plan's issue may name one day of it; its message goes beside the whole list.
+      const at = issue.path.map(String);
+      const path = ['settings', ...(at[1] === 'recheckPlans' ? at.slice(0, 3) : at)].join('.');
       errors[path] ??= friendly(issue);
     }
   if (!parsed.success || Object.keys(errors).length) return { settings: null, errors };

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { SPECIES_KEYS } from '@/shared/body-plans';
+import { PLAN_GROUP_LABELS, PLAN_GROUPS } from '@/shared/treatments';
 import type { WorkshopSettings } from '@/shared/schemas';
 import { VERDICT_OPTIONS } from '@/shared/wood';
 import { SPECIES_LABELS } from '@/src/components/findings/labels';
@@ -11,12 +12,12 @@ import { fonts, spacing } from '@/src/theme';
 /** The workshop's settings as a reader sees them (only the owner changes them). */
 export function SettingsView({ settings: s }: { settings: WorkshopSettings }) {
   const r = s.wood.verdictRules;
+  const t = s.treatments;
   return (
     <View style={styles.wrap} testID="settings-view">
       <Group title="Units and rates">
         <Row label="Units" value={s.units === 'metric' ? 'Metric (mm, °C)' : 'Imperial (in, °F)'} />
         <Row label="Labour rate" value={`${money(s.labourRatePerHour, s.currency)} an hour`} />
-        <Row label="Region" value={s.region || 'Not set'} />
       </Group>
       <Group title="Verdict thresholds" note="Common practice defaults, yours to change.">
         <Row
@@ -53,6 +54,22 @@ export function SettingsView({ settings: s }: { settings: WorkshopSettings }) {
             key={k}
             label={`${SPECIES_LABELS[k]}, per board foot`}
             value={money(s.wood.timberPricePerBoardFoot[k], s.currency)}
+          />
+        ))}
+      </Group>
+      <Group title="Treatments and re-checks">
+        <Row label="Region" value={s.region || 'Not set'} />
+        <Row label="Local regulatory notes" value={t.regulatoryNotes || 'None'} />
+        <Row label="Workshop time zone" value={t.timeZone} />
+        <Row
+          label="Cleared after (common practice default)"
+          value={`${t.clearance.cleanChecksRequired} clean re-checks over at least ${t.clearance.minSpanDays} days`}
+        />
+        {PLAN_GROUPS.map((g) => (
+          <Row
+            key={g}
+            label={`${PLAN_GROUP_LABELS[g]}, re-check on day`}
+            value={t.recheckPlans[g].join(', ')}
           />
         ))}
       </Group>
