@@ -1,7 +1,4 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { fireEvent, render, screen, waitFor } from '@testing-library/react-native';
-import type { ReactNode } from 'react';
-import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { getZone } from '@/shared/body-plans';
 import type {
   DecisionResponse,
@@ -12,9 +9,9 @@ import type {
 import { DEFAULT_WOOD_SETTINGS } from '@/shared/wood';
 import { ApiRequestError, request } from '@/src/api/client';
 import { DecisionEditor } from '@/src/components/decisions/decision-editor';
-import { ToastProvider } from '@/src/components/ui';
 import { fixturePlan } from './fixtures/fixture-plan';
 import { DEFAULT_TREATMENT_SETTINGS } from '@/shared/treatments';
+import { TestProviders } from './support/providers';
 
 jest.mock('@/src/api/client', () => ({
   ...jest.requireActual('@/src/api/client'),
@@ -95,26 +92,7 @@ function saved(body: SaveDecisionRequest, over: Partial<DecisionResponse> = {}):
   };
 }
 
-function wrapper({ children }: { children: ReactNode }) {
-  const queryClient = new QueryClient({
-    defaultOptions: {
-      queries: { retry: false, gcTime: Infinity },
-      mutations: { retry: false, gcTime: Infinity },
-    },
-  });
-  return (
-    <SafeAreaProvider
-      initialMetrics={{
-        frame: { x: 0, y: 0, width: 390, height: 844 },
-        insets: { top: 0, left: 0, right: 0, bottom: 0 },
-      }}
-    >
-      <QueryClientProvider client={queryClient}>
-        <ToastProvider>{children}</ToastProvider>
-      </QueryClientProvider>
-    </SafeAreaProvider>
-  );
-}
+const wrapper = TestProviders;
 
 function renderEditor(
   opts: {

@@ -1,14 +1,11 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { fireEvent, render, screen } from '@testing-library/react-native';
-import type { ReactNode } from 'react';
-import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { correctedMoisture } from '@/shared/wood';
 import { request } from '@/src/api/client';
 import { FindingEditor } from '@/src/components/findings/finding-editor';
-import { ToastProvider } from '@/src/components/ui';
 import { CONFIRM_NOTE } from '@/src/components/wood/agents-panel';
 import { MoisturePanel } from '@/src/components/wood/moisture-panel';
 import { fixturePlan } from './fixtures/fixture-plan';
+import { TestProviders } from './support/providers';
 
 jest.mock('@/src/api/client', () => ({
   ...jest.requireActual('@/src/api/client'),
@@ -108,26 +105,7 @@ describe('MoisturePanel', () => {
   });
 });
 
-function wrapper({ children }: { children: ReactNode }) {
-  const queryClient = new QueryClient({
-    defaultOptions: {
-      queries: { retry: false, gcTime: Infinity },
-      mutations: { retry: false, gcTime: Infinity },
-    },
-  });
-  return (
-    <SafeAreaProvider
-      initialMetrics={{
-        frame: { x: 0, y: 0, width: 390, height: 844 },
-        insets: { top: 0, left: 0, right: 0, bottom: 0 },
-      }}
-    >
-      <QueryClientProvider client={queryClient}>
-        <ToastProvider>{children}</ToastProvider>
-      </QueryClientProvider>
-    </SafeAreaProvider>
-  );
-}
+const wrapper = TestProviders;
 
 describe('finding form', () => {
   beforeEach(() => (request as jest.Mock).mockReset());

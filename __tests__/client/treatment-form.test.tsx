@@ -1,13 +1,10 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { fireEvent, render, screen, waitFor } from '@testing-library/react-native';
-import type { ReactNode } from 'react';
 import type { ReactTestInstance } from 'react-test-renderer';
-import { SafeAreaProvider } from 'react-native-safe-area-context';
 import type { TreatmentResponse } from '@/shared/schemas/treatment';
 import { ApiRequestError, request } from '@/src/api/client';
 import { TreatmentEditor } from '@/src/components/treatments/treatment-editor';
-import { ToastProvider } from '@/src/components/ui';
 import { fixturePlan } from './fixtures/fixture-plan';
+import { TestProviders } from './support/providers';
 
 jest.mock('@/src/api/client', () => ({
   ...jest.requireActual('@/src/api/client'),
@@ -19,26 +16,7 @@ const WID = '4a3c1f8e-1b2d-4c5e-8f90-1a2b3c4d5e6f';
 const VID = '1c2d3e4f-5a6b-4c7d-8e9f-0a1b2c3d4e5f';
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/;
 
-function wrapper({ children }: { children: ReactNode }) {
-  const queryClient = new QueryClient({
-    defaultOptions: {
-      queries: { retry: false, gcTime: Infinity },
-      mutations: { retry: false, gcTime: Infinity },
-    },
-  });
-  return (
-    <SafeAreaProvider
-      initialMetrics={{
-        frame: { x: 0, y: 0, width: 390, height: 844 },
-        insets: { top: 0, left: 0, right: 0, bottom: 0 },
-      }}
-    >
-      <QueryClientProvider client={queryClient}>
-        <ToastProvider>{children}</ToastProvider>
-      </QueryClientProvider>
-    </SafeAreaProvider>
-  );
-}
+const wrapper = TestProviders;
 
 function renderEditor() {
   const onDone = jest.fn();
