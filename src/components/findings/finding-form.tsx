@@ -2,12 +2,19 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { SPECIES_KEYS, type BodyPlan } from '@/shared/body-plans';
 import { ACTIVITY, DECAY_TYPES, PICK_TEST, PICK_TEST_LABELS } from '@/shared/schemas';
-import { AppText, Checkbox, SegmentedControl, Select, TextField } from '@/src/components/ui';
+import {
+  AppText,
+  Checkbox,
+  SegmentedControl,
+  Select,
+  TextField,
+  FormSection,
+} from '@/src/components/ui';
 import { AgentsPanel, hasAgentEvidence } from '@/src/components/wood/agents-panel';
 import type { Units } from '@/src/components/wood/labels';
 import { readMoisture, type ShopClimate } from '@/src/components/wood/moisture';
 import { MoisturePanel } from '@/src/components/wood/moisture-panel';
-import { colors, spacing } from '@/src/theme';
+import { spacing } from '@/src/theme';
 import { EvidenceChips } from './evidence-chips';
 import {
   FACES,
@@ -52,7 +59,7 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
   const moisture = readMoisture({ ...values, climate }).reading;
   return (
     <View style={styles.form}>
-      <Section title="Where">
+      <FormSection title="Where">
         <ZonePicker
           plan={plan}
           value={values.zoneKey}
@@ -66,9 +73,9 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
           onChange={(atJointOrFitting) => onChange({ atJointOrFitting })}
           testID="finding-joint"
         />
-      </Section>
+      </FormSection>
 
-      <Section title="Condition">
+      <FormSection title="Condition">
         <SeverityPicker
           value={values.severity}
           onChange={(severity) => onChange({ severity })}
@@ -82,9 +89,9 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
           error={err('decayType')}
           testID="decay"
         />
-      </Section>
+      </FormSection>
 
-      <Section title="Insects">
+      <FormSection title="Insects">
         <EvidenceChips
           value={values.insectEvidence}
           onChange={(insectEvidence) => onChange({ insectEvidence })}
@@ -116,9 +123,9 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
             species={values.species}
           />
         ) : null}
-      </Section>
+      </FormSection>
 
-      <Section title="Moisture">
+      <FormSection title="Moisture">
         <View style={styles.pair}>
           <View style={styles.half}>
             <TextField
@@ -158,9 +165,9 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
           error={err('moisture.species')}
           testID="species"
         />
-      </Section>
+      </FormSection>
 
-      <Section title="Probe and measure">
+      <FormSection title="Probe and measure">
         <Select
           label="Pick test"
           options={pickOptions}
@@ -197,9 +204,9 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
           testID="finding-length"
           {...numeric}
         />
-      </Section>
+      </FormSection>
 
-      <Section title="Notes and photos">
+      <FormSection title="Notes and photos">
         <TextField
           label="Notes"
           multiline
@@ -210,30 +217,13 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
           testID="finding-notes"
         />
         {photos}
-      </Section>
-    </View>
-  );
-}
-
-function Section({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <View style={styles.section}>
-      <AppText variant="title" accessibilityRole="header">
-        {title}
-      </AppText>
-      {children}
+      </FormSection>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   form: { gap: spacing.xl },
-  section: {
-    gap: spacing.md,
-    paddingTop: spacing.lg,
-    borderTopWidth: 1,
-    borderTopColor: colors.line,
-  },
   pair: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   // Wide enough that two inputs with a unit sit side by side only where they fit.

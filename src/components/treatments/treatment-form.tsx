@@ -1,4 +1,4 @@
-import type { ComponentProps, ReactNode } from 'react';
+import type { ComponentProps } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { BodyPlan } from '@/shared/body-plans';
 import {
@@ -9,7 +9,7 @@ import {
 } from '@/shared/schemas/treatment';
 import { AGENT_LABELS } from '@/shared/wood';
 import type { ZoneStateCue } from '@/src/components/body-diagram';
-import { AppText, Checkbox, ChipToggle, TextField } from '@/src/components/ui';
+import { AppText, Checkbox, ChipToggle, TextField, FormSection } from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
 import { CautionsPanel } from './cautions-panel';
 import { TreatmentZonePicker } from './treatment-zone-picker';
@@ -58,7 +58,7 @@ export function TreatmentForm({
   );
   return (
     <View style={styles.form}>
-      <Section title="Where">
+      <FormSection title="Where">
         <TreatmentZonePicker
           plan={plan}
           value={values.zoneKeys}
@@ -69,9 +69,9 @@ export function TreatmentForm({
         {text('areaTreated', 'treatment-area', {
           hint: 'In your words, e.g. both sills, 2 × 1.6 m',
         })}
-      </Section>
+      </FormSection>
 
-      <Section title="When and by whom">
+      <FormSection title="When and by whom">
         {errors.appliedAt ? (
           <FieldError id="treatment-applied-at-error" message={errors.appliedAt} />
         ) : null}
@@ -99,9 +99,9 @@ export function TreatmentForm({
         {text('licenceNumber', 'treatment-licence', {
           hint: 'Optional; shown on reports where the law asks for it.',
         })}
-      </Section>
+      </FormSection>
 
-      <Section title="From the label">
+      <FormSection title="From the label">
         <AppText variant="caption" muted>
           Copy these exactly as printed on the product label.
         </AppText>
@@ -111,9 +111,9 @@ export function TreatmentForm({
         {text('concentration', 'treatment-concentration', { hint: 'As the label states it' })}
         {text('formulation', 'treatment-formulation')}
         {text('dilution', 'treatment-dilution', { hint: 'As you mixed it, in the label’s terms' })}
-      </Section>
+      </FormSection>
 
-      <Section title="How">
+      <FormSection title="How">
         <ChipChoice
           label="Method"
           testID="treatment-method"
@@ -168,9 +168,9 @@ export function TreatmentForm({
           suffix: 'h',
           ...numeric,
         })}
-      </Section>
+      </FormSection>
 
-      <Section title="Protective equipment worn">
+      <FormSection title="Protective equipment worn">
         <AppText variant="caption" muted>
           What the label asks for, and what you wore.
         </AppText>
@@ -188,9 +188,9 @@ export function TreatmentForm({
             />
           ))}
         </View>
-      </Section>
+      </FormSection>
 
-      <Section title="Conditions and notes">
+      <FormSection title="Conditions and notes">
         {errors.conditions ? (
           <FieldError id="treatment-conditions-error" message={errors.conditions} />
         ) : null}
@@ -217,7 +217,7 @@ export function TreatmentForm({
           </View>
         </View>
         {text('notes', 'treatment-notes', { multiline: true })}
-      </Section>
+      </FormSection>
 
       <CautionsPanel method={values.method} regulatoryNotes={regulatoryNotes} region={region} />
 
@@ -294,25 +294,8 @@ function FieldError({ id, message }: { id: string; message: string }) {
   );
 }
 
-function Section({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <View style={styles.section}>
-      <AppText variant="title" accessibilityRole="header">
-        {title}
-      </AppText>
-      {children}
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
   form: { gap: spacing.xl },
-  section: {
-    gap: spacing.md,
-    paddingTop: spacing.lg,
-    borderTopWidth: 1,
-    borderTopColor: colors.line,
-  },
   group: { gap: spacing.sm },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   pair: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },

@@ -12,3 +12,4 @@ export { ToastProvider, useToast, type ToastKind, type ToastOptions } from './to
 export { serverFieldErrors, zodFieldErrors, type FieldErrors } from './form-errors';
 export { FieldErrorsNotice, FormMessage } from './form-message';
 export { useFormSubmit } from './use-form-submit';
+export { FormSection } from './form-section';
