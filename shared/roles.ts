@@ -21,6 +21,8 @@ export const ACTIONS = [
   'decisions.write',
   'treatments.write',
   'rechecks.write',
+  'reports.write',
+  'reports.share',
 ] as const;
 export type Action = (typeof ACTIONS)[number];
 
@@ -36,6 +38,8 @@ const INSPECTOR: Action[] = [
   'decisions.write',
   'treatments.write',
   'rechecks.write',
+  'reports.write',
+  'reports.share',
 ];
 
 export const PERMISSIONS: Record<Role, readonly Action[]> = {

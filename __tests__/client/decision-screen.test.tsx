@@ -27,6 +27,7 @@ const zone = getZone(fixturePlan, 'left-sill')!;
 
 const settings = (over: Partial<WorkshopSettings> = {}): WorkshopSettings => ({
   units: 'metric',
+  paperSize: 'A4',
   region: '',
   labourRatePerHour: 40,
   currency: 'EUR',

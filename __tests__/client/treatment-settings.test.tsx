@@ -30,6 +30,7 @@ const workshop = (role: Role): WorkshopResponse => ({
   role,
   settings: {
     units: 'metric',
+    paperSize: 'A4',
     region: 'Lower Vale',
     labourRatePerHour: 40,
     currency: 'EUR',

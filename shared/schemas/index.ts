@@ -7,3 +7,4 @@ export * from './finding';
 export * from './decision';
 export * from './treatment';
 export * from './recheck';
+export * from './report';

@@ -16,6 +16,7 @@ import {
 } from '../wood/settings';
 import { emailSchema } from './auth';
 import { isoDateTime, uuid } from './common';
+import { PAPER_SIZES } from './report';
 
 export const UNITS = ['metric', 'imperial'] as const;
 
@@ -24,6 +25,7 @@ const settingsFields = {
   region: z.string().trim().max(120),
   labourRatePerHour: z.number().min(0).max(100000),
   currency: z.string().trim().min(1).max(8),
+  paperSize: z.enum(PAPER_SIZES),
 };
 
 export const workshopSettings = z.object({
@@ -31,6 +33,8 @@ export const workshopSettings = z.object({
   region: settingsFields.region.default(''),
   labourRatePerHour: settingsFields.labourRatePerHour.default(0),
   currency: settingsFields.currency.default('EUR'),
+  /** Paper of the generated reports. */
+  paperSize: settingsFields.paperSize.default('A4'),
   wood: woodSettingsSchema.default(() => structuredClone(DEFAULT_WOOD_SETTINGS)),
   treatments: treatmentSettingsSchema.default(() => structuredClone(DEFAULT_TREATMENT_SETTINGS)),
 });

@@ -7,6 +7,7 @@ import { parseNumber } from '@/src/components/findings/form-values';
 /** What the settings form edits: numbers stay text, shares of a member are whole percent. */
 export type SettingsFormValues = {
   units: WorkshopSettings['units'];
+  paperSize: WorkshopSettings['paperSize'];
   region: string;
   currency: string;
   labourRatePerHour: string;
@@ -47,6 +48,7 @@ export function valuesFromSettings(s: WorkshopSettings): SettingsFormValues {
   const r = s.wood.verdictRules;
   return {
     units: s.units,
+    paperSize: s.paperSize,
     region: s.region,
     currency: s.currency,
     labourRatePerHour: String(s.labourRatePerHour),
@@ -78,6 +80,7 @@ export function planError(errors: SettingsErrors, group: PlanGroup): string | un
 export function withWoodDefaults(values: SettingsFormValues): SettingsFormValues {
   const defaults = valuesFromSettings({
     units: values.units,
+    paperSize: values.paperSize,
     region: values.region,
     currency: values.currency,
     labourRatePerHour: 0,
@@ -122,6 +125,7 @@ export function buildSettings(values: SettingsFormValues): {
   };
   const candidate = {
     units: values.units,
+    paperSize: values.paperSize,
     region: values.region,
     currency: values.currency,
     labourRatePerHour: num('settings.labourRatePerHour', values.labourRatePerHour),
