@@ -139,10 +139,17 @@ async function main(): Promise<number> {
       grantPattern: TEST_DATABASE_PATTERN,
     });
     checkInterrupted();
-    await ensureWebExport({ root: REPO_ROOT });
-    checkInterrupted();
+    // Only browser tests need the export; a targeted server or client run skips it, so several
+    // targeted runs at once never rebuild dist/ under each other.
+    if (args.length === 0 || args.some((a) => a.includes('e2e'))) {
+      await ensureWebExport({ root: REPO_ROOT });
+      checkInterrupted();
+    }
 
-    const resultsFile = path.join(artifactsDir, 'jest-results.json');
+    const resultsFile = path.join(
+      artifactsDir,
+      args.length === 0 ? 'jest-results.json' : `jest-results-${process.pid}.json`,
+    );
     fs.rmSync(resultsFile, { force: true });
     const wantsOwnJson = args.some((a) => a === '--json' || a.startsWith('--outputFile'));
     const code = await runJest(
@@ -161,6 +168,7 @@ async function main(): Promise<number> {
     );
     if (!wantsOwnJson && fs.existsSync(resultsFile)) {
       console.log(summaryLine(JSON.parse(fs.readFileSync(resultsFile, 'utf8')) as JestSummary));
+      if (args.length > 0) fs.rmSync(resultsFile, { force: true });
     }
     return interrupted ? 130 : code || staticCode;
   } finally {
