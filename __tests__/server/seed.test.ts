@@ -6,18 +6,26 @@ import request from 'supertest';
 import {
   AuditEntry,
   Finding,
+  MemberDecision,
   Membership,
   Photo,
+  ReCheck,
   Survey,
+  Treatment,
   User,
   Vehicle,
   VehicleAccess,
   Workshop,
 } from '@/server/models';
 import { DEMO_ACCOUNTS, seedDemoIfEmpty } from '@/server/seeders/demo';
+import { classForChosen } from '@/server/services/decisions';
 import { verifyPassword } from '@/server/services/passwords';
+import { readSettings } from '@/server/services/workshops';
 import { createStorage, type StorageAdapter } from '@/server/storage';
 import { getBodyPlan, getZone, polygonCentroid } from '@/shared/body-plans';
+import { treatmentData } from '@/shared/schemas/treatment';
+import { localDate, recheckDueDates, zoneStateItems } from '@/shared/treatments';
+import { assessMember, estimateRepair } from '@/shared/wood';
 import { createTestDatabase, type TestDatabase } from '../e2e/support/test-db';
 import { buildTestApp, type TestApp } from './support/test-app';
 
@@ -116,7 +124,7 @@ describe('seedDemoIfEmpty', () => {
 
       const findings = await Finding.findAll();
       expect(findings.length).toBeGreaterThanOrEqual(13);
-      expect(findings.length).toBeLessThanOrEqual(18);
+      expect(findings.length).toBeLessThanOrEqual(20);
       expect(new Set(findings.map((f) => f.severity))).toEqual(new Set([0, 1, 2, 3, 4]));
       expect(new Set(findings.map((f) => f.decayType))).toEqual(
         new Set(['none', 'brown-rot', 'white-rot', 'soft-rot', 'unknown']),
@@ -160,6 +168,135 @@ describe('seedDemoIfEmpty', () => {
     SEED_TIMEOUT,
   );
 
+  it('gives the demo tourer decisions as the decisions service computes them', async () => {
+    const vehicle = (await Vehicle.findOne({ where: { make: 'Aldermoor' } }))!;
+    const plan = getBodyPlan(vehicle.bodyPlanKey)!;
+    const workshop = (await Workshop.findByPk(vehicle.workshopId))!;
+    const settings = readSettings(workshop.settings);
+    const findings = await Finding.findAll({ where: { vehicleId: vehicle.id } });
+    const decisions = await MemberDecision.findAll({ where: { vehicleId: vehicle.id } });
+    const of = (cls: string) => decisions.filter((d) => d.decisionClass === cls);
+    expect(of('structural-must-fix').length).toBeGreaterThanOrEqual(3);
+    expect(of('structural-must-fix').map((d) => d.chosenOption)).toEqual(
+      expect.arrayContaining(['splice', 'replace-member']),
+    );
+    expect(of('cosmetic').length).toBeGreaterThanOrEqual(2);
+    expect(of('monitor').length).toBeGreaterThanOrEqual(1);
+    // The browser test of the decision screen decides the left sill itself.
+    expect(decisions.map((d) => d.zoneKey)).not.toContain('sill-left');
+
+    for (const d of decisions) {
+      const zone = getZone(plan, d.zoneKey)!;
+      const mine = findings.filter((f) => f.zoneKey === d.zoneKey);
+      expect(mine.length).toBeGreaterThan(0);
+      const activeAgent = mine.some((f) => f.activity === 'active');
+      const { verdict } = assessMember(
+        d.inputs,
+        {
+          structuralClass: zone.structuralClass,
+          worstSeverity: Math.max(...mine.map((f) => f.severity)),
+          activeAgent,
+          assemblyMembersNeedingReplacement: 0,
+        },
+        settings.wood,
+      );
+      expect(d.recommendedOption).toBe(verdict.option);
+      expect(d.recommendationReasons).toEqual(verdict.reasons);
+      const estimate = estimateRepair({
+        option: d.chosenOption,
+        ...d.inputs,
+        settings: settings.wood,
+        labourRatePerHour: settings.labourRatePerHour,
+      });
+      expect(d.estimatedHours).toBeCloseTo(estimate.hours, 2);
+      expect(d.labourCost).toBeCloseTo(estimate.labourCost, 2);
+      expect(d.materialCost).toBeCloseTo(estimate.materialCost, 2);
+      expect(d.totalCost).toBeCloseTo(estimate.totalCost, 2);
+      expect(d.materials).toEqual(estimate.cutList);
+      expect(d.decisionClass).toBe(
+        d.chosenOption === verdict.option
+          ? verdict.decisionClass
+          : classForChosen(d.chosenOption, zone, activeAgent),
+      );
+      expect(d.overrideReason.length > 0).toBe(d.chosenOption !== d.recommendedOption);
+    }
+  });
+
+  it('treats the zones with active insects, with planned re-checks dated from today', async () => {
+    const vehicle = (await Vehicle.findOne({ where: { make: 'Aldermoor' } }))!;
+    const plan = getBodyPlan(vehicle.bodyPlanKey)!;
+    const settings = readSettings((await Workshop.findByPk(vehicle.workshopId))!.settings);
+    const findings = await Finding.findAll({ where: { vehicleId: vehicle.id } });
+    const [treatment, ...others] = await Treatment.findAll({ where: { vehicleId: vehicle.id } });
+    expect(others).toHaveLength(0);
+    const data = treatmentData.parse(treatment.data);
+    const insectZones = findings
+      .filter((f) => f.insectEvidence.length > 0 && f.activity === 'active')
+      .map((f) => f.zoneKey);
+    expect([...data.zoneKeys].sort()).toEqual([...new Set(insectZones)].sort());
+    expect(data.registrationNumber).toMatch(/DEMO/);
+    expect(data.ppe.length).toBeGreaterThan(0);
+
+    const survey = (await Survey.findOne({ where: { vehicleId: vehicle.id } }))!;
+    const now = Date.now();
+    expect(treatment.appliedAt.getTime()).toBeGreaterThan(survey.createdAt.getTime());
+    expect(treatment.appliedAt.getTime()).toBeLessThan(now);
+    expect(now - treatment.appliedAt.getTime()).toBeLessThan(90 * 24 * 3600 * 1000);
+
+    const rechecks = await ReCheck.findAll({
+      where: { treatmentId: treatment.id },
+      order: [['dueDate', 'ASC']],
+    });
+    expect(rechecks.map((r) => r.dueDate)).toEqual(
+      recheckDueDates(data.appliedAt, data.targetAgent, data.method, settings.treatments),
+    );
+    const clean = rechecks.filter((r) => r.status === 'clean');
+    expect(clean).toHaveLength(1);
+    expect(clean[0].completedAt!.getTime()).toBeGreaterThan(treatment.appliedAt.getTime());
+    expect(clean[0].completedAt!.getTime()).toBeLessThanOrEqual(now);
+    expect(rechecks.filter((r) => r.status === 'pending')).toHaveLength(rechecks.length - 1);
+    const today = localDate(new Date(), settings.treatments.timeZone);
+    expect(rechecks.filter((r) => r.status === 'pending').every((r) => r.dueDate >= today)).toBe(
+      true,
+    );
+
+    // The zone states the app computes: treated and watched, the untreated active ones still active.
+    const states = zoneStateItems(
+      {
+        zoneKeys: plan.zones.map((z) => z.key),
+        findings: findings.map((f) => ({
+          zoneKey: f.zoneKey,
+          date: survey.date,
+          createdAt: f.createdAt.toISOString(),
+          severity: f.severity,
+          activity: f.activity,
+          insectEvidence: f.insectEvidence,
+          decayType: f.decayType,
+        })),
+        treatments: [{ id: treatment.id, appliedAt: data.appliedAt, zoneKeys: data.zoneKeys }],
+        rechecks: rechecks.map((r) => ({
+          treatmentId: r.treatmentId,
+          zoneKeys: r.zoneKeys,
+          dueDate: r.dueDate,
+          status: r.status,
+          completedAt: r.completedAt?.toISOString() ?? null,
+        })),
+      },
+      settings.treatments.clearance,
+      settings.treatments.timeZone,
+    );
+    for (const key of data.zoneKeys)
+      expect(states.find((s) => s.zoneKey === key)).toMatchObject({
+        state: 'treated-watching',
+        flagged: false,
+      });
+
+    expect(survey.notAccessibleZones).toEqual(
+      expect.arrayContaining(['heel-board', 'floor-board-3']),
+    );
+    expect(survey.notAccessibleNotes).toMatch(/fuel tank/);
+  });
+
   it('does nothing the second time', async () => {
     const before = await Promise.all([
       Workshop.count(),
@@ -167,6 +304,9 @@ describe('seedDemoIfEmpty', () => {
       Vehicle.count(),
       Finding.count(),
       Photo.count(),
+      MemberDecision.count(),
+      Treatment.count(),
+      ReCheck.count(),
     ]);
     expect(await seedDemoIfEmpty(db.sequelize, db.config, { storage })).toEqual({ seeded: false });
     expect(
@@ -176,6 +316,9 @@ describe('seedDemoIfEmpty', () => {
         Vehicle.count(),
         Finding.count(),
         Photo.count(),
+        MemberDecision.count(),
+        Treatment.count(),
+        ReCheck.count(),
       ]),
     ).toEqual(before);
     expect(storedFiles()).toHaveLength(before[4] * 2);

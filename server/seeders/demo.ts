@@ -26,9 +26,11 @@ import type { Pin } from '../models/finding';
 import { audit } from '../services/audit';
 import { hashPassword } from '../services/passwords';
 import { processPhoto } from '../services/photo-processing';
+import { readSettings } from '../services/workshops';
 import { photoKey } from '../services/photos';
 import { createStorage, type StorageAdapter } from '../storage';
 import { drawDemoPhoto, type DemoPhotoKind } from './demo-photos';
+import { ALDERMOOR_WORK, seedDemoWork, type DemoWork } from './demo-work';
 
 /**
  * An invented scenario: a small coachbuilding workshop with three wood-framed vehicles in for a
@@ -86,6 +88,8 @@ type DemoVehicle = {
     notes: string;
   };
   findings: DemoFinding[];
+  /** Member decisions and treatments after the survey (the reports are drawn from them). */
+  work?: DemoWork;
 };
 
 const ash = 'white-ash';
@@ -106,13 +110,14 @@ const VEHICLES: DemoVehicle[] = [
         'Ash frame under aluminium panels. Spent two winters in an open-sided barn before coming in.',
     },
     sharedWithClient: true,
+    work: ALDERMOOR_WORK,
     survey: {
       date: '2026-10-06',
       airTempC: 16.5,
       relativeHumidity: 62,
-      notAccessible: [{ trade: 'heel-board' }, { trade: 'floor-board' }],
+      notAccessible: [{ trade: 'heel-board' }, { key: 'floor-board-3', trade: 'floor-board' }],
       notAccessibleNotes:
-        'Rear floor and heel board under the fixed rear seat cushion; seat not removed at this visit.',
+        'Rear floor and heel board under the fixed rear seat pan; seat not removed at this visit. Rear body framing behind the fuel tank not reached; tank left in place.',
       notes:
         'Baseline before any work. Hood down, trim in place. Awl and pin meter used throughout.',
     },
@@ -185,6 +190,45 @@ const VEHICLES: DemoVehicle[] = [
         notes:
           'Fresh pale powder on the rail top after the car stood overnight; about a dozen round holes near 1.5 mm.',
         photo: { kind: 'frass', caption: 'Powdery frass below the holes, collected on a card' },
+      },
+      {
+        key: 'cross-member-centre',
+        trade: 'cross-member',
+        severity: 3,
+        decayType: 'brown-rot',
+        activity: 'inactive',
+        moisture: { meterReading: 18, woodTempC: 12, species: 'white-ash' },
+        pickTest: 'brash-break',
+        decayDepthMm: { top: 0, bottom: 20, left: 12, right: 0 },
+        affectedLengthMm: 260,
+        atJointOrFitting: true,
+        notes:
+          'Dry now, but cracked into cubes on the underside where it is notched over the right sill; an old water track from the floor drain.',
+      },
+      {
+        key: 'tonneau-rail-left',
+        trade: 'tonneau-rail',
+        side: 'left',
+        severity: 2,
+        decayType: 'white-rot',
+        activity: 'inactive',
+        moisture: { meterReading: 16, woodTempC: 13, species: ash },
+        pickTest: 'long-splinter',
+        decayDepthMm: { top: 4, bottom: 0, left: 0, right: 0 },
+        affectedLengthMm: 220,
+        notes: 'Bleached, slightly soft top face under the hood-bag strap; firm below 4 mm.',
+      },
+      {
+        key: 'tonneau-rail-rear',
+        trade: 'tonneau-rail',
+        severity: 2,
+        decayType: 'soft-rot',
+        activity: 'inactive',
+        moisture: { meterReading: 19, woodTempC: 13, species: ash },
+        pickTest: 'brash-break',
+        decayDepthMm: { top: 0, bottom: 10, left: 0, right: 0 },
+        affectedLengthMm: 260,
+        notes: 'Grey, finely checked underside at the centre where rain sat on the tonneau cover.',
       },
       {
         trade: 'seat-frame',
@@ -569,6 +613,7 @@ async function seed(
       people.inspector,
     );
 
+    const created: Finding[] = [];
     for (const demoFinding of demo.findings) {
       const { key, trade, side, photo, ...fields } = demoFinding;
       const zone = pickZone(plan, { key, trade, side });
@@ -602,6 +647,7 @@ async function seed(
         },
         { transaction },
       );
+      created.push(finding);
       await note(
         'finding.create',
         'finding',
@@ -621,6 +667,17 @@ async function seed(
           rendered,
         );
     }
+    if (demo.work)
+      await seedDemoWork(transaction, {
+        work: demo.work,
+        plan,
+        vehicle,
+        findings: created,
+        settings: readSettings(workshop.settings),
+        people,
+        surveyRecordedAt: recordedAt,
+        note,
+      });
   }
 }
 

@@ -14,10 +14,9 @@ import type { SurveyResponse } from '../schemas/survey';
 import type { TreatmentResponse } from '../schemas/treatment';
 import type { VehicleResponse } from '../schemas/vehicle';
 import type { WorkshopSettings } from '../schemas/workshop';
-import type { ConditionSummary } from '../schemas/report';
 import type { DecisionClass, VerdictOption } from '../wood/types';
 
-import type { PaperSize, ReportKind } from '../schemas/report';
+import type { ConditionSummary, PaperSize, ReportKind } from '../schemas/report';
 
 export { REPORT_KINDS, PAPER_SIZES, type ReportKind, type PaperSize } from '../schemas/report';
 
@@ -91,6 +90,8 @@ export interface ScopeTotals {
   totalCost: number;
   structural: { hours: number; totalCost: number; count: number };
   cosmetic: { hours: number; totalCost: number; count: number };
+  /** Decisions classed monitor (keeping a member still costs an inspection's hours). */
+  monitor: { hours: number; totalCost: number; count: number };
   boardFeetBySpecies: { species: SpeciesKey; label: string; boardFeet: number; cost: number }[];
   currency: string;
 }
