@@ -4,6 +4,7 @@ import cookieParser from 'cookie-parser';
 import express, { type Request } from 'express';
 import helmet from 'helmet';
 import type { Config } from './config';
+import { createReportQueue, type ReportQueue } from './jobs/report-queue';
 import { notFound } from './errors';
 import type { Mailer } from './mail/transport';
 import { authenticate, requireAuth } from './middleware/auth';
@@ -15,14 +16,22 @@ import { devRoutes } from './routes/dev';
 import { findingRoutes } from './routes/findings';
 import { invitationPublicRoutes } from './routes/invitations';
 import { photoRoutes } from './routes/photos';
+import { publicRoutes } from './routes/public';
 import { recheckRoutes } from './routes/rechecks';
+import { reportRoutes } from './routes/reports';
 import { surveyRoutes } from './routes/surveys';
 import { treatmentRoutes } from './routes/treatments';
 import { vehicleRoutes } from './routes/vehicles';
 import { workshopRoutes } from './routes/workshops';
 import type { StorageAdapter } from './storage';
 
-export type AppDeps = { config: Config; storage: StorageAdapter; mailer: Mailer };
+export type AppDeps = {
+  config: Config;
+  storage: StorageAdapter;
+  mailer: Mailer;
+  /** startServer passes the one it starts and stops; otherwise (tests) the app makes its own. */
+  reportQueue?: ReportQueue;
+};
 
 export function depsOf(req: Request): AppDeps {
   return req.app.locals.deps as AppDeps;
@@ -33,6 +42,9 @@ export function createApp(deps: AppDeps) {
   const { config } = deps;
   const app = express();
   app.locals.deps = deps;
+  app.locals.reportQueue =
+    deps.reportQueue ??
+    createReportQueue({ storage: deps.storage, concurrency: config.reports.concurrency });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
   app.use(
@@ -56,6 +68,8 @@ export function createApp(deps: AppDeps) {
   );
 
   const api = express.Router();
+  // Share links and verification answer the same with or without a session: mounted before it.
+  api.use('/public', publicRoutes());
   api.use(express.json({ limit: '256kb' }), cookieParser(), authenticate(config));
   api.use('/auth', authRoutes());
   api.use('/invitations', invitationPublicRoutes());
@@ -71,6 +85,7 @@ export function createApp(deps: AppDeps) {
   scoped.use(decisionRoutes());
   scoped.use(treatmentRoutes());
   scoped.use(recheckRoutes());
+  scoped.use(reportRoutes());
   api.use('/workshops/:workshopId', scoped);
 
   api.use((_req, _res, next) => next(notFound('API route')));

@@ -54,6 +54,9 @@ const envSchema = z
       .default(900),
     REMINDER_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(20).default(5),
     INSTANCE_ID: z.string().trim().min(1).max(100).optional(),
+    REPORT_MAX_IN_FLIGHT: z.coerce.number().int().min(1).max(50).default(3),
+    REPORT_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(2),
+    PUBLIC_RATE_LIMIT: z.coerce.number().int().min(1).default(300),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && (!env.JWT_SECRET || env.JWT_SECRET.length < 32))
@@ -133,6 +136,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
       intervalMs: e.REMINDER_INTERVAL_SECONDS * 1000,
       maxAttempts: e.REMINDER_MAX_ATTEMPTS,
     },
+    reports: {
+      /** Queued + rendering reports one workshop may have at once (more → 429). */
+      maxInFlight: e.REPORT_MAX_IN_FLIGHT,
+      /** PDFs this process renders at the same time, across workshops. */
+      concurrency: e.REPORT_CONCURRENCY,
+    },
+    /** Requests per IP in 15 minutes to the signed-out share and verification routes. */
+    publicRateLimit: e.PUBLIC_RATE_LIMIT,
     /** Names this process in job claims; unique per process unless set. */
     instanceId:
       e.INSTANCE_ID ?? `${os.hostname()}-${process.pid}-${crypto.randomBytes(3).toString('hex')}`,

@@ -4,6 +4,7 @@ import { createApp } from './app';
 import { loadConfig, type Config } from './config';
 import { createSequelize } from './db';
 import { startReminderJob } from './jobs/reminder-job';
+import { createReportQueue } from './jobs/report-queue';
 import { createMailer } from './mail/transport';
 import { createStorage } from './storage';
 
@@ -20,7 +21,8 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
     port: config.mail.port,
     from: config.mail.from,
   });
-  const app = createApp({ config, storage, mailer });
+  const reportQueue = createReportQueue({ storage, concurrency: config.reports.concurrency });
+  const app = createApp({ config, storage, mailer, reportQueue });
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.port, config.host, () => resolve(s));
     s.once('error', reject);
@@ -28,6 +30,8 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.port;
   const url = `http://${config.host}:${port}`;
+  // Reports a stopped process left queued or rendering are made now (their inputs are stored).
+  await reportQueue.recover();
   const reminders = config.reminders.enabled
     ? startReminderJob({ config, sequelize, mailer, publicUrl: config.publicUrl ?? url })
     : null;
@@ -38,6 +42,8 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
     async close() {
       // Let a digest being sent finish (and be recorded) before its connections go.
       await reminders?.stop();
+      // A PDF being rendered is stored before the database goes; waiting ones stay queued.
+      await reportQueue.stop();
       const closed = new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await closed;

@@ -4,6 +4,7 @@ import path from 'node:path';
 import request from 'supertest';
 import { startMailSink, type MailSink } from '@/server/mail/sink';
 import { AuditEntry } from '@/server/models';
+import type { ReportQueue } from '@/server/jobs/report-queue';
 import type { StorageAdapter } from '@/server/storage';
 import { can, type Action } from '@/shared/roles';
 import {
@@ -22,6 +23,7 @@ import {
 import { buildSaveDecision, createDecision } from '../factories/decisions';
 import { createInvitation } from '../factories/invitations';
 import { appStorage, createPhoto, jpeg } from '../factories/photos';
+import { cloneReadyReport, generateReport } from '../factories/reports';
 import { buildTreatment, createRecheck, createTreatment } from '../factories/treatments';
 import { buildTestApp, type TestApp } from './support/test-app';
 
@@ -46,7 +48,7 @@ type Actor = { name: ActorName; member: Member | null };
 
 /** Fresh records for one request, so a write in one case never changes what the next one sees. */
 type Fixture = Awaited<ReturnType<typeof freshRecords>> & { actor: Actor };
-type Req = { url: string; body?: Record<string, unknown>; photo?: boolean };
+type Req = { url: string; body?: Record<string, unknown>; photo?: boolean; pdf?: Buffer };
 
 type Row = {
   /** Method and path exactly as in the DEVELOPERS.md table. */
@@ -78,10 +80,33 @@ beforeAll(async () => {
   outsider = (await createWorkshopWithTeam(t.config)).owner;
 });
 afterAll(async () => {
+  await reportQueue().stop();
   await t.close();
   await sink.close();
   fs.rmSync(mailDir, { recursive: true, force: true });
 });
+
+const reportQueue = () => t.app.locals.reportQueue as ReportQueue;
+
+let generated: Promise<{ id: string }> | null = null;
+/**
+ * A ready report on the fixture's vehicle: one is generated through the API and its job, then
+ * each case gets a row pointing at its stored PDF (rendering per case would add a minute).
+ */
+async function readyReport(f: Fixture) {
+  generated ??= generateReport(t.app, team.owner, f.vehicle.id, 'condition');
+  return cloneReadyReport((await generated).id, f.vehicle.id);
+}
+
+/** A link to a ready report of the fixture's vehicle; the answer carries the token. */
+async function shareOf(f: Fixture) {
+  const report = await readyReport(f);
+  const res = await request(t.app)
+    .post(`${f.w}/reports/${report.id}/shares`)
+    .set(team.owner.auth)
+    .send({});
+  return { report, share: res.body as { id: string; token: string } };
+}
 
 async function recheckOn(vehicle: Awaited<ReturnType<typeof createVehicle>>) {
   return createRecheck(await createTreatment(vehicle));
@@ -587,6 +612,87 @@ const ROUTES: Row[] = [
     ok: 200,
     build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/timeline?kinds=finding,treatment` }),
   },
+  // Reports, links and verification
+  {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/reports',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: (f) => ({ url: `${f.w}/vehicles/${f.vehicle.id}/reports` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/vehicles/:vid/reports',
+    needs: 'reports.write',
+    vehicle: true,
+    ok: 202,
+    build: async (f) => {
+      // Nothing in flight, so the workshop's limit on concurrent generations is never what answers.
+      await reportQueue().idle();
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/reports`, body: { kind: 'condition' } };
+    },
+  },
+  {
+    route: 'GET /api/workshops/:wid/reports/:rid',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({ url: `${f.w}/reports/${(await readyReport(f)).id}` }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/reports/:rid/pdf',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({ url: `${f.w}/reports/${(await readyReport(f)).id}/pdf` }),
+  },
+  {
+    route: 'GET /api/workshops/:wid/reports/:rid/shares',
+    needs: 'reports.share',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({ url: `${f.w}/reports/${(await readyReport(f)).id}/shares` }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/reports/:rid/shares',
+    needs: 'reports.share',
+    vehicle: true,
+    ok: 201,
+    build: async (f) => ({
+      url: `${f.w}/reports/${(await readyReport(f)).id}/shares`,
+      body: { expiresInDays: 3 },
+    }),
+  },
+  {
+    route: 'POST /api/workshops/:wid/shares/:sid/revoke',
+    needs: 'reports.share',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => ({ url: `${f.w}/shares/${(await shareOf(f)).share.id}/revoke` }),
+  },
+  {
+    route: 'GET /api/public/shares/:token',
+    needs: 'anyone',
+    ok: 200,
+    build: async (f) => ({ url: `/api/public/shares/${(await shareOf(f)).share.token}` }),
+  },
+  {
+    route: 'GET /api/public/shares/:token/pdf',
+    needs: 'anyone',
+    ok: 200,
+    build: async (f) => ({ url: `/api/public/shares/${(await shareOf(f)).share.token}/pdf` }),
+  },
+  {
+    route: 'GET /api/public/verify/:shortId',
+    needs: 'anyone',
+    ok: 200,
+    build: async (f) => ({ url: `/api/public/verify/${(await readyReport(f)).shortId}` }),
+  },
+  {
+    route: 'POST /api/public/verify',
+    needs: 'anyone',
+    ok: 200,
+    build: () => ({ url: '/api/public/verify', pdf: Buffer.from('%PDF-1.7\n%%EOF\n') }),
+  },
 ];
 
 const ACTORS: ActorName[] = [
@@ -639,6 +745,7 @@ describe.each(ROUTES.map((r) => [`${r.route}${r.label ? ` ${r.label}` : ''}`, r]
       let call = request(t.app)[method](req.url);
       if (a.member) call = call.set(a.member.auth);
       if (req.photo) call = call.attach('photos', await jpeg(), 'sill.jpg');
+      else if (req.pdf) call = call.attach('pdf', req.pdf, 'report.pdf');
       else if (req.body) call = call.send(req.body);
       const auditBefore = await AuditEntry.count({ where: { workshopId: team.workshop.id } });
 

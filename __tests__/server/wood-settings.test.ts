@@ -63,6 +63,7 @@ describe('PATCH /api/workshops/:wid — wood settings', () => {
       region: '',
       labourRatePerHour: 55,
       currency: 'GBP',
+      paperSize: 'A4',
       wood: expected,
       treatments: DEFAULT_TREATMENT_SETTINGS,
     });

@@ -29,6 +29,7 @@ describe('GET /api/workshops/:wid', () => {
           region: '',
           labourRatePerHour: 0,
           currency: 'EUR',
+          paperSize: 'A4',
           wood: DEFAULT_WOOD_SETTINGS,
           treatments: DEFAULT_TREATMENT_SETTINGS,
         },
@@ -63,6 +64,7 @@ describe('PATCH /api/workshops/:wid', () => {
       region: 'Coastal, damp winters',
       labourRatePerHour: 65,
       currency: 'EUR',
+      paperSize: 'A4',
       wood: DEFAULT_WOOD_SETTINGS,
       treatments: DEFAULT_TREATMENT_SETTINGS,
     });
@@ -71,7 +73,7 @@ describe('PATCH /api/workshops/:wid', () => {
     const second = await request(t.app)
       .patch(`/api/workshops/${workshop.id}`)
       .set(owner.auth)
-      .send({ name, settings: { units: 'imperial' } })
+      .send({ name, settings: { units: 'imperial', paperSize: 'Letter' } })
       .expect(200);
     expect(workshopResponse.parse(second.body)).toMatchObject({
       name,
@@ -91,6 +93,7 @@ describe('PATCH /api/workshops/:wid', () => {
       region: 'Coastal, damp winters',
       labourRatePerHour: 65,
       currency: 'EUR',
+      paperSize: 'Letter',
       wood: DEFAULT_WOOD_SETTINGS,
       treatments: DEFAULT_TREATMENT_SETTINGS,
     });
@@ -102,6 +105,7 @@ describe('PATCH /api/workshops/:wid', () => {
     expect(entries[1].changes).toEqual({
       name: { from: workshop.name, to: name },
       units: { from: 'metric', to: 'imperial' },
+      paperSize: { from: 'A4', to: 'Letter' },
     });
   });
 
@@ -120,11 +124,12 @@ describe('PATCH /api/workshops/:wid', () => {
     const res = await request(t.app)
       .patch(`/api/workshops/${workshop.id}`)
       .set(owner.auth)
-      .send({ name: 'x', settings: { units: 'cubits', labourRatePerHour: -5 } })
+      .send({ name: 'x', settings: { units: 'cubits', labourRatePerHour: -5, paperSize: 'A5' } })
       .expect(400);
     expect(Object.keys(res.body.error.fields).sort()).toEqual([
       'name',
       'settings.labourRatePerHour',
+      'settings.paperSize',
       'settings.units',
     ]);
     expect((await Workshop.findByPk(workshop.id))!.name).toBe(workshop.name);

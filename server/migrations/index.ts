@@ -3,6 +3,7 @@ import * as auditTimePrecision from './20261202000000-audit-time-precision';
 import * as memberDecisions from './20261203000000-member-decisions';
 import * as treatments from './20261204000000-treatments';
 import * as reminders from './20261205000000-reminders';
+import * as reports from './20261206000000-reports';
 
 /** Every migration, in order. Named by timestamp; each has `up` and `down`. */
 export const MIGRATIONS = [
@@ -11,4 +12,5 @@ export const MIGRATIONS = [
   { name: '20261203000000-member-decisions', ...memberDecisions },
   { name: '20261204000000-treatments', ...treatments },
   { name: '20261205000000-reminders', ...reminders },
+  { name: '20261206000000-reports', ...reports },
 ];

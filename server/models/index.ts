@@ -7,6 +7,8 @@ import { Membership } from './membership';
 import { Photo } from './photo';
 import { ReCheck } from './re-check';
 import { ReminderDelivery } from './reminder-delivery';
+import { Report } from './report';
+import { ReportShare } from './report-share';
 import { Survey } from './survey';
 import { Treatment } from './treatment';
 import { TreatmentVersion } from './treatment-version';
@@ -24,6 +26,8 @@ export {
   Photo,
   ReCheck,
   ReminderDelivery,
+  Report,
+  ReportShare,
   Survey,
   Treatment,
   TreatmentVersion,
@@ -50,6 +54,8 @@ export function initModels(sequelize: Sequelize) {
     TreatmentVersion,
     ReCheck,
     ReminderDelivery,
+    Report,
+    ReportShare,
     AuditEntry,
   ])
     m.initModel(sequelize);
@@ -111,6 +117,16 @@ export function initModels(sequelize: Sequelize) {
 
   ReminderDelivery.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   ReminderDelivery.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+
+  Vehicle.hasMany(Report, { foreignKey: 'vehicleId', as: 'reports' });
+  Report.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  Report.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  Report.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Report.hasMany(ReportShare, { foreignKey: 'reportId', as: 'shares' });
+  ReportShare.belongsTo(Report, { foreignKey: 'reportId', as: 'report' });
+  ReportShare.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  ReportShare.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  ReportShare.belongsTo(User, { foreignKey: 'revokedById', as: 'revokedBy' });
 
   AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   AuditEntry.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });

@@ -158,6 +158,11 @@ export const verifyResponse = z.object({
   genuine: z.boolean(),
   /** 'hash' when the bytes matched a stored report, 'id' when only the identifier was looked up. */
   matchedBy: z.enum(['hash', 'id']).nullable(),
+  /**
+   * A file that matches nothing but names an issued report: the identifier it claims (so the page
+   * can say "changed" rather than "never issued"). Null otherwise.
+   */
+  claimedShortId: z.string().nullable(),
   report: z
     .object({
       shortId: z.string(),

@@ -1,0 +1,180 @@
+import crypto from 'node:crypto';
+import type { Request } from 'express';
+import { Op } from 'sequelize';
+import { Photo, Report } from '../models';
+import { renderReport } from '../reports/render';
+import type { RenderReport } from '../reports/types';
+import type { StorageAdapter } from '../storage';
+
+export type ReportQueue = {
+  /** Renders the queued report soon (at most `concurrency` at once in this process). */
+  enqueue(reportId: string): void;
+  /** Offers again every report a stopped process left queued or rendering; returns how many. */
+  recover(): Promise<number>;
+  /** Resolves once nothing is waiting or rendering. */
+  idle(): Promise<void>;
+  /** No new renders start; resolves once those in progress are stored. Waiting ones stay queued. */
+  stop(): Promise<void>;
+};
+
+export const reportPdfKey = (workshopId: string, reportId: string) =>
+  `reports/${workshopId}/${reportId}.pdf`;
+
+/** Progress writes are at most this often per report (the client polls about once a second). */
+const PROGRESS_EVERY_MS = 400;
+
+export function reportQueueOf(req: Request): ReportQueue {
+  return req.app.locals.reportQueue as ReportQueue;
+}
+
+/**
+ * The in-process report job. Its state is the `reports` table: a row is claimed by moving it from
+ * queued to rendering, so a report offered twice is rendered once. No timers: work starts when a
+ * report is enqueued or one finishes, so an idle queue keeps nothing alive.
+ */
+export function createReportQueue({
+  storage,
+  concurrency,
+  render = renderReport,
+  onError = (error) => console.error('Report generation failed:', error),
+}: {
+  storage: StorageAdapter;
+  concurrency: number;
+  render?: RenderReport;
+  onError?: (error: unknown) => void;
+}): ReportQueue {
+  const waiting: string[] = [];
+  const active = new Set<Promise<void>>();
+  let idleWaiters: (() => void)[] = [];
+  let stopped = false;
+
+  const settleIdle = () => {
+    if (waiting.length > 0 || active.size > 0) return;
+    for (const resolve of idleWaiters) resolve();
+    idleWaiters = [];
+  };
+
+  const pump = () => {
+    while (!stopped && active.size < concurrency && waiting.length > 0) {
+      const id = waiting.shift()!;
+      const run: Promise<void> = generate(id, storage, render)
+        .catch(onError)
+        .finally(() => {
+          active.delete(run);
+          pump();
+          settleIdle();
+        });
+      active.add(run);
+    }
+    settleIdle();
+  };
+
+  return {
+    enqueue(reportId) {
+      if (stopped || waiting.includes(reportId)) return;
+      waiting.push(reportId);
+      pump();
+    },
+    async recover() {
+      // One process renders; whatever is rendering at its start-up was cut off by a restart.
+      await Report.update(
+        { status: 'queued', progress: 0, stage: 'Waiting to start again', startedAt: null },
+        { where: { status: 'rendering' } },
+      );
+      const rows = await Report.findAll({
+        where: { status: 'queued' },
+        attributes: ['id'],
+        order: [['createdAt', 'ASC']],
+      });
+      for (const r of rows) this.enqueue(r.id);
+      return rows.length;
+    },
+    idle() {
+      if (waiting.length === 0 && active.size === 0) return Promise.resolve();
+      return new Promise((resolve) => idleWaiters.push(resolve));
+    },
+    async stop() {
+      stopped = true;
+      waiting.length = 0;
+      await Promise.allSettled([...active]);
+      settleIdle();
+    },
+  };
+}
+
+/** Claims, renders, stores and records one report; a failure is recorded on the row in plain words. */
+async function generate(reportId: string, storage: StorageAdapter, render: RenderReport) {
+  const [claimed] = await Report.update(
+    { status: 'rendering', startedAt: new Date(), progress: 0, stage: 'Starting' },
+    { where: { id: reportId, status: 'queued' } },
+  );
+  if (claimed === 0) return;
+  const report = await Report.findByPk(reportId);
+  if (!report) return;
+
+  let lastWrite = 0;
+  let lastStage = '';
+  let writing: Promise<unknown> = Promise.resolve();
+  const onProgress = (progress: number, stage: string) => {
+    const now = Date.now();
+    if (stage === lastStage && now - lastWrite < PROGRESS_EVERY_MS) return;
+    lastWrite = now;
+    lastStage = stage;
+    const value = Math.max(0, Math.min(99, Math.round(progress)));
+    writing = writing.then(() =>
+      Report.update(
+        { progress: value, stage: stage.slice(0, 120) },
+        { where: { id: reportId, status: 'rendering', progress: { [Op.lte]: value } } },
+      ),
+    );
+  };
+
+  try {
+    const loadPhoto = async (photoId: string) => {
+      // Only this workshop's photos, however the snapshot came to name them.
+      const photo = await Photo.findOne({
+        where: { id: photoId, workshopId: report.workshopId },
+        attributes: ['id', 'displayKey'],
+      });
+      return photo ? storage.get(photo.displayKey) : null;
+    };
+    const rendered = await render(
+      report.snapshot,
+      { shortId: report.shortId, version: report.version },
+      { loadPhoto },
+      onProgress,
+    );
+    await writing;
+    const key = reportPdfKey(report.workshopId, report.id);
+    await storage.put(key, rendered.pdf, 'application/pdf');
+    await Report.update(
+      {
+        status: 'ready',
+        progress: 100,
+        stage: 'Ready',
+        error: null,
+        storageKey: key,
+        sha256: crypto.createHash('sha256').update(rendered.pdf).digest('hex'),
+        byteSize: rendered.pdf.length,
+        pageCount: rendered.pageCount,
+        summary: rendered.summary,
+        finishedAt: new Date(),
+      },
+      { where: { id: reportId } },
+    );
+  } catch (error) {
+    await writing.catch(() => undefined);
+    await Report.update(
+      {
+        status: 'failed',
+        stage: 'Failed',
+        error: `The PDF could not be made (${
+          error instanceof Error ? error.message : String(error)
+        }). Generate the report again; the failed attempt is kept for reference.`.slice(0, 1000),
+        finishedAt: new Date(),
+      },
+      { where: { id: reportId } },
+    );
+    throw error;
+  }
+}
