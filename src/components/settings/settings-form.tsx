@@ -13,6 +13,10 @@ const unitOptions = [
   { value: 'metric' as const, label: 'Metric (mm, °C)' },
   { value: 'imperial' as const, label: 'Imperial (in, °F)' },
 ];
+const paperOptions = [
+  { value: 'A4' as const, label: 'A4' },
+  { value: 'Letter' as const, label: 'US Letter' },
+];
 const numeric = { keyboardType: 'decimal-pad' as const, inputMode: 'decimal' as const };
 const RULES = 'settings.wood.verdictRules';
 
@@ -34,6 +38,13 @@ export function SettingsForm({ values, onChange, errors }: Props) {
           value={values.units}
           onChange={(units) => onChange({ units })}
           testID="settings-units"
+        />
+        <SegmentedControl
+          label="Paper size for printed reports"
+          options={paperOptions}
+          value={values.paperSize}
+          onChange={(paperSize) => onChange({ paperSize })}
+          testID="settings-paper"
         />
         <View style={styles.grid}>
           <Cell>

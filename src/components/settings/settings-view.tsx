@@ -17,6 +17,7 @@ export function SettingsView({ settings: s }: { settings: WorkshopSettings }) {
     <View style={styles.wrap} testID="settings-view">
       <Group title="Units and rates">
         <Row label="Units" value={s.units === 'metric' ? 'Metric (mm, °C)' : 'Imperial (in, °F)'} />
+        <Row label="Report paper" value={s.paperSize === 'A4' ? 'A4' : 'US Letter'} />
         <Row label="Labour rate" value={`${money(s.labourRatePerHour, s.currency)} an hour`} />
       </Group>
       <Group title="Verdict thresholds" note="Common practice defaults, yours to change.">

@@ -182,6 +182,13 @@ export default function VehicleOverview() {
             />
           ) : null}
           <Button
+            label="Reports"
+            variant="secondary"
+            compact
+            onPress={() => router.push(`/vehicles/${vehicleId}/reports`)}
+            testID="vehicle-reports"
+          />
+          <Button
             label="Timeline"
             variant="secondary"
             compact
