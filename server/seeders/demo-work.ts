@@ -5,9 +5,9 @@ import type { DecisionInputs } from '@/shared/schemas/decision';
 import { treatmentData, type TreatmentData } from '@/shared/schemas/treatment';
 import type { WorkshopSettings } from '@/shared/schemas/workshop';
 import { recheckDueDates } from '@/shared/treatments';
-import { assessMember, estimateRepair, type VerdictOption } from '@/shared/wood';
+import type { VerdictOption } from '@/shared/wood';
 import { Finding, MemberDecision, ReCheck, Treatment, type User, type Vehicle } from '../models';
-import { classForChosen } from '../services/decisions';
+import { decisionFields } from '../services/decisions';
 
 /**
  * The demo tourer's repair decisions and its beetle treatment: what the reports are drawn
@@ -99,54 +99,6 @@ export function demoInputs(zone: Zone, findings: Finding[]): DecisionInputs {
   };
 }
 
-/** saveDecision()'s computation without the request: verdict, class and estimate. */
-export function computeDecision(
-  zone: Zone,
-  inputs: DecisionInputs,
-  evidence: { severity: number; activeAgent: boolean; assemblyReplacements: number },
-  settings: WorkshopSettings,
-  override?: DemoDecision['override'],
-) {
-  const { verdict } = assessMember(
-    inputs,
-    {
-      structuralClass: zone.structuralClass,
-      worstSeverity: evidence.severity,
-      activeAgent: evidence.activeAgent,
-      assemblyMembersNeedingReplacement: evidence.assemblyReplacements,
-    },
-    settings.wood,
-  );
-  const chosen = override && override.option !== verdict.option ? override.option : verdict.option;
-  const overridden = chosen !== verdict.option;
-  const estimate = estimateRepair({
-    option: chosen,
-    widthMm: inputs.widthMm,
-    depthMm: inputs.depthMm,
-    memberLengthMm: inputs.memberLengthMm,
-    affectedLengthMm: inputs.affectedLengthMm,
-    species: inputs.species,
-    settings: settings.wood,
-    labourRatePerHour: settings.labourRatePerHour,
-  });
-  return {
-    inputs,
-    recommendedOption: verdict.option,
-    recommendationReasons: verdict.reasons,
-    chosenOption: chosen,
-    overrideReason: overridden ? override!.reason : '',
-    decisionClass: overridden
-      ? classForChosen(chosen, zone, evidence.activeAgent)
-      : verdict.decisionClass,
-    estimatedHours: estimate.hours,
-    labourCost: estimate.labourCost,
-    materialCost: estimate.materialCost,
-    totalCost: estimate.totalCost,
-    materials: estimate.cutList,
-    splice: estimate.splice,
-  };
-}
-
 type Note = (
   action: string,
   entityType: string,
@@ -178,20 +130,21 @@ export async function seedDemoWork(
     const zone = getZone(plan, d.zoneKey);
     if (!zone) throw new Error(`Demo seed: body plan ${plan.key} has no zone ${d.zoneKey}`);
     const mine = findings.filter((f) => f.zoneKey === zone.key);
-    const fields = computeDecision(
+    const fields = decisionFields(
       zone,
       demoInputs(zone, mine),
       {
-        severity: Math.max(0, ...mine.map((f) => f.severity)),
+        structuralClass: zone.structuralClass,
+        worstSeverity: Math.max(0, ...mine.map((f) => f.severity)),
         activeAgent: mine.some((f) => f.activity === 'active'),
         // As the service counts them: earlier decisions of the same assembly that replace.
-        assemblyReplacements: zone.assembly
+        assemblyMembersNeedingReplacement: zone.assembly
           ? saved.filter((s) => s.zone.assembly === zone.assembly && REPLACING.includes(s.option))
               .length
           : 0,
       },
       settings,
-      d.override,
+      d.override ?? null,
     );
     const row = await MemberDecision.create(
       {

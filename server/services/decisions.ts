@@ -13,8 +13,10 @@ import {
   assessMember,
   VERDICT_OPTION_LABELS,
   type DecisionClass,
+  type MemberContext as MemberContextForVerdict,
   type VerdictOption,
 } from '@/shared/wood';
+import type { WorkshopSettings } from '@/shared/schemas/workshop';
 import { badRequest, notFound, staleVersion } from '../errors';
 import type { MemberContext } from '../middleware/workshop';
 import { Finding, MemberDecision, User, Workshop, type Vehicle } from '../models';
@@ -194,6 +196,50 @@ export function classForChosen(
 }
 
 /**
+ * The stored fields of a decision: the rules' recommendation from the measurements and the zone's
+ * context, the chosen option (the recommendation unless `choice` differs), its class and its
+ * estimate. saveDecision() and the demo seed both store exactly this.
+ */
+export function decisionFields(
+  zone: Zone,
+  inputs: DecisionInputs,
+  context: MemberContextForVerdict,
+  settings: WorkshopSettings,
+  choice: { option: VerdictOption; reason: string } | null,
+) {
+  const { verdict } = assessMember(inputs, context, settings.wood);
+  const chosen = choice?.option ?? verdict.option;
+  const overridden = chosen !== verdict.option;
+  const estimate = estimateRepair({
+    option: chosen,
+    widthMm: inputs.widthMm,
+    depthMm: inputs.depthMm,
+    memberLengthMm: inputs.memberLengthMm,
+    affectedLengthMm: inputs.affectedLengthMm,
+    species: inputs.species,
+    settings: settings.wood,
+    labourRatePerHour: settings.labourRatePerHour,
+  });
+  return {
+    inputs,
+    recommendedOption: verdict.option,
+    recommendationReasons: verdict.reasons,
+    chosenOption: chosen,
+    // A reason is only kept for an override; a stale one would explain a choice no longer made.
+    overrideReason: overridden ? (choice?.reason ?? '') : '',
+    decisionClass: overridden
+      ? classForChosen(chosen, zone, context.activeAgent)
+      : verdict.decisionClass,
+    estimatedHours: estimate.hours,
+    labourCost: estimate.labourCost,
+    materialCost: estimate.materialCost,
+    totalCost: estimate.totalCost,
+    materials: estimate.cutList,
+    splice: estimate.splice,
+  };
+}
+
+/**
  * Creates or replaces the decision for one member. The recommendation is always recomputed here
  * from the measured inputs, the zone on the body plan, its open findings, the other decisions of
  * its assembly and the workshop's rules and scarf slope, so what is stored is what the rules say. The vehicle row
@@ -236,8 +282,13 @@ export async function saveDecision(
         transaction,
       ),
     };
-    const { verdict } = inRequestTerms(() => assessMember(inputs, context, settings.wood));
-    const overridden = body.chosenOption !== verdict.option;
+    const computed = inRequestTerms(() =>
+      decisionFields(zone, inputs, context, settings, {
+        option: body.chosenOption,
+        reason: body.overrideReason,
+      }),
+    );
+    const overridden = computed.chosenOption !== computed.recommendedOption;
 
     const errors: Record<string, string> = {};
     if (existing && body.version === undefined)
@@ -245,39 +296,12 @@ export async function saveDecision(
     if (overridden && !body.overrideReason) errors.overrideReason = 'Say why you chose differently';
     if (Object.keys(errors).length) throw badRequest(errors);
 
-    const estimate = inRequestTerms(() =>
-      estimateRepair({
-        option: body.chosenOption,
-        widthMm: inputs.widthMm,
-        depthMm: inputs.depthMm,
-        memberLengthMm: inputs.memberLengthMm,
-        affectedLengthMm: inputs.affectedLengthMm,
-        species: inputs.species,
-        settings: settings.wood,
-        labourRatePerHour: settings.labourRatePerHour,
-      }),
-    );
-    const fields = {
-      inputs,
-      recommendedOption: verdict.option,
-      recommendationReasons: verdict.reasons,
-      chosenOption: body.chosenOption,
-      // A reason is only kept for an override; a stale one would explain a choice no longer made.
-      overrideReason: overridden ? body.overrideReason : '',
-      decisionClass: overridden
-        ? classForChosen(body.chosenOption, zone, evidence.activeAgent)
-        : verdict.decisionClass,
-      estimatedHours: estimate.hours,
-      labourCost: estimate.labourCost,
-      materialCost: estimate.materialCost,
-      totalCost: estimate.totalCost,
-      materials: estimate.cutList,
-      splice: estimate.splice,
-      notes: body.notes,
-    };
+    const fields = { ...computed, notes: body.notes };
     const chosenWords = VERDICT_OPTION_LABELS[body.chosenOption].toLowerCase();
     const what = `${zone.label} on ${describeVehicle(vehicle)}: ${chosenWords}${
-      overridden ? ` (recommended: ${VERDICT_OPTION_LABELS[verdict.option].toLowerCase()})` : ''
+      overridden
+        ? ` (recommended: ${VERDICT_OPTION_LABELS[computed.recommendedOption].toLowerCase()})`
+        : ''
     }`;
 
     if (!existing) {
