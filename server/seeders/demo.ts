@@ -162,6 +162,10 @@ const VEHICLES: DemoVehicle[] = [
         atJointOrFitting: true,
         notes:
           'Bleached, stringy wood at the foot of the pillar where it tenons into the sill. Hinge screws turn without biting.',
+        photo: {
+          kind: 'sill-rot',
+          caption: 'Foot of the left front hinge pillar, lower hinge removed',
+        },
       },
       {
         trade: 'door-rail',
