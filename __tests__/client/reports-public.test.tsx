@@ -51,6 +51,29 @@ beforeEach(() => {
 });
 
 describe('public share page', () => {
+  it('draws the body with the report’s severities; tapping a member names it, nothing opens', async () => {
+    useLocalSearchParams.mockReturnValue({ token: TOKEN });
+    mockRequest.mockResolvedValue(publicShare());
+    render(<SharedReport />, { wrapper: TestProviders });
+    expect(await screen.findByTestId('public-body-diagram')).toBeOnTheScreen();
+    expect(screen.getByTestId('public-diagram-zone')).toHaveTextContent(/Tap a member/);
+    fireEvent.press(screen.getByTestId('zone-sill-left'));
+    expect(screen.getByTestId('public-diagram-zone')).toHaveTextContent(
+      /^Left sill: worst severity 3, 2 findings\.$/,
+    );
+    fireEvent.press(screen.getByTestId('zone-hinge-pillar-front-left'));
+    expect(screen.getByTestId('public-diagram-zone')).toHaveTextContent(/: nothing recorded\.$/);
+    expect(mockRequest).toHaveBeenCalledTimes(1);
+  });
+
+  it('leaves the drawing out for a report stored without one', async () => {
+    useLocalSearchParams.mockReturnValue({ token: TOKEN });
+    mockRequest.mockResolvedValue({ ...publicShare(), summary: buildSummary({ diagram: null }) });
+    render(<SharedReport />, { wrapper: TestProviders });
+    expect(await screen.findByTestId('public-vehicle')).toBeOnTheScreen();
+    expect(screen.queryByTestId('public-diagram')).toBeNull();
+  });
+
   it('shows the summary the PDF prints, the download and the verification line, without a session', async () => {
     useLocalSearchParams.mockReturnValue({ token: TOKEN });
     mockRequest.mockResolvedValue(publicShare());

@@ -101,6 +101,16 @@ describe('reportSummary', () => {
           expect(summary.totals).toBeNull();
         }
         expect(summary.mustFix).toHaveLength(scope.structural.length);
+        // The drawing on the share page: every zone with open findings, its count and worst severity.
+        const expected: Record<string, { worstSeverity: number; count: number }> = {};
+        for (const f of snapshot.findings) {
+          const z = expected[f.zoneKey] ?? { worstSeverity: 0, count: 0 };
+          expected[f.zoneKey] = {
+            worstSeverity: Math.max(z.worstSeverity, f.severity),
+            count: z.count + 1,
+          };
+        }
+        expect(summary.diagram).toEqual({ bodyPlanKey: plan.key, zones: expected });
       }),
       { numRuns: 100 },
     );

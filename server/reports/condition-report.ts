@@ -35,7 +35,8 @@ export async function drawConditionReport(
   onProgress: RenderProgress,
 ): Promise<number> {
   drawCover(doc, report.cover, identity, REPORT_KIND_LABELS.condition);
-  drawConditionBox(doc, report.condition, report.headline.slice(2));
+  // headline[0] repeats the grade the box's title and first line already give.
+  drawConditionBox(doc, report.condition, { body: report.headline.slice(1) });
   await onProgress(15, 'Drawing the body diagram');
   drawBodyDiagram(doc, report.bodyPlanKey, report.zoneSeverity, {
     scale: 0.62,

@@ -54,17 +54,27 @@ export function drawCover(
 }
 
 /** The condition grade in a shaded box: label, rank on our five-step scale, meaning, counts. */
-export function drawConditionBox(doc: Doc, c: ConditionSummary, extra: string[] = []) {
+/**
+ * `body` replaces the counts under the grade text: the buyer's report gives plain sentences
+ * instead of the trade's counts by class (which would say the same twice).
+ */
+export function drawConditionBox(
+  doc: Doc,
+  c: ConditionSummary,
+  opts: { extra?: string[]; body?: string[] } = {},
+) {
   const x = left(doc);
   const w = contentWidth(doc);
   const pad = 10;
   const lines = [
     c.gradeText,
-    `Primary members sound: ${c.primarySound} of ${c.primaryMembers} (${percent(c.primarySoundShare)}).`,
-    `Structural, must fix: ${c.countsByClass['structural-must-fix']}; cosmetic: ${c.countsByClass.cosmetic}; monitor: ${c.countsByClass.monitor}` +
-      (c.undecidedZones ? `; zones awaiting a decision: ${c.undecidedZones}.` : '.'),
-    `Zones with active attack: ${c.activeZones}; zones under treatment or watched: ${c.watchedZones}.`,
-    ...extra,
+    ...(opts.body ?? [
+      `Primary members sound: ${c.primarySound} of ${c.primaryMembers} (${percent(c.primarySoundShare)}).`,
+      `Structural, must fix: ${c.countsByClass['structural-must-fix']}; cosmetic: ${c.countsByClass.cosmetic}; monitor: ${c.countsByClass.monitor}` +
+        (c.undecidedZones ? `; zones awaiting a decision: ${c.undecidedZones}.` : '.'),
+      `Zones with active attack: ${c.activeZones}; zones under treatment or watched: ${c.watchedZones}.`,
+    ]),
+    ...(opts.extra ?? []),
   ];
   doc.font(REGULAR).fontSize(SIZE.body);
   const textH = lines.reduce((h, l) => h + doc.heightOfString(l, { width: w - pad * 2 }) + 2, 0);

@@ -50,9 +50,9 @@ export async function drawRepairScope(
 ): Promise<number> {
   drawCover(doc, scope.cover, identity, REPORT_KIND_LABELS['repair-scope']);
   const t = scope.totals;
-  drawConditionBox(doc, scope.condition, [
-    `Estimated work: ${hours(t.hours)}, ${money(t.totalCost, t.currency)} in all.`,
-  ]);
+  drawConditionBox(doc, scope.condition, {
+    extra: [`Estimated work: ${hours(t.hours)}, ${money(t.totalCost, t.currency)} in all.`],
+  });
   await onProgress(15, 'Drawing the body diagram');
   heading(doc, 'Body diagram', 2);
   drawBodyDiagram(doc, scope.bodyPlanKey, scope.zoneSeverity, {

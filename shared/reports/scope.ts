@@ -192,6 +192,13 @@ function totals(
   };
 }
 
+function findingCounts(plan: BodyPlan, findings: ReportSnapshot['findings']) {
+  const counts: Record<string, number> = {};
+  for (const f of findings)
+    if (zoneOf(plan, f.zoneKey)) counts[f.zoneKey] = (counts[f.zoneKey] ?? 0) + 1;
+  return counts;
+}
+
 export function buildRepairScope(snapshot: ReportSnapshot, plan: BodyPlan): RepairScope {
   const decisions = snapshot.decisions.filter((d) => zoneOf(plan, d.zoneKey));
   const items = decisions.map((d) => scopeItem(snapshot, plan, d));
@@ -245,6 +252,7 @@ export function buildRepairScope(snapshot: ReportSnapshot, plan: BodyPlan): Repa
     limitations: [...SURVEY_LIMITATIONS],
     cautions: reportCautions(),
     zoneSeverity,
+    zoneFindingCount: findingCounts(plan, snapshot.findings),
     bodyPlanKey: plan.key,
     units: settings.units,
     paperSize: settings.paperSize,

@@ -27,5 +27,14 @@ export function reportSummary(kind: ReportKind, scope: RepairScope): ReportSumma
             currency: scope.totals.currency,
           }
         : null,
+    diagram: {
+      bodyPlanKey: scope.bodyPlanKey,
+      zones: Object.fromEntries(
+        Object.entries(scope.zoneFindingCount).map(([zoneKey, count]) => [
+          zoneKey,
+          { worstSeverity: scope.zoneSeverity[zoneKey] ?? 0, count },
+        ]),
+      ),
+    },
   };
 }

@@ -188,6 +188,8 @@ export interface RepairScope {
   cautions: ReportCaution[];
   /** Zone key → worst open severity, for the diagram (every zone of the plan). */
   zoneSeverity: Record<string, number>;
+  /** Zone key → number of open findings (zones without any are left out). */
+  zoneFindingCount: Record<string, number>;
   bodyPlanKey: string;
   units: 'metric' | 'imperial';
   paperSize: PaperSize;

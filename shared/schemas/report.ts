@@ -67,6 +67,14 @@ export const reportSummarySchema = z.object({
   notInspected: z.array(notInspectedItem),
   /** Repair scope only: total cost and hours; null on the buyer's report. */
   totals: z.object({ hours: z.number(), totalCost: z.number(), currency: z.string() }).nullable(),
+  /** The body drawing the PDF shows: the plan and, for zones with open findings, worst severity and count. */
+  diagram: z
+    .object({
+      bodyPlanKey: z.string(),
+      zones: z.record(z.string(), z.object({ worstSeverity: z.number(), count: z.number() })),
+    })
+    .nullable()
+    .default(null),
 });
 export type ReportSummary = z.infer<typeof reportSummarySchema>;
 

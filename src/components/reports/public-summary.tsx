@@ -7,6 +7,7 @@ import { hours, money, percent } from '@/src/components/wood/labels';
 import { colors, fonts, spacing } from '@/src/theme';
 import { DownloadLink } from './download-link';
 import { formatBytes, formatDay, pagesLabel, pdfFileName } from './labels';
+import { ReportDiagram } from './report-diagram';
 
 /** A shared report as its reader sees it: the same numbers the PDF prints, read-only. */
 export function PublicSummary({ share }: { share: PublicShareResponse }) {
@@ -47,6 +48,11 @@ export function PublicSummary({ share }: { share: PublicShareResponse }) {
           {percent(c.primarySoundShare)})
         </AppText>
       </Card>
+      {s.diagram ? (
+        <Section title="Where the damage is" testID="public-diagram-section">
+          <ReportDiagram diagram={s.diagram} />
+        </Section>
+      ) : null}
       <Section title="Must be fixed for the body to be safe" testID="public-must-fix">
         {s.mustFix.length === 0 ? (
           <AppText>
