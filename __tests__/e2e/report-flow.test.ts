@@ -141,6 +141,10 @@ describe('reports and sharing', () => {
     expect(await text(summary, 'public-primary')).toMatch(/\d+ of \d+ \(\d+ %\)/);
     expect(await text(summary, 'public-verify-line')).toContain(buyerReport.shortId);
     expect(await buyer.getByTestId('bottom-bar').count()).toBe(0);
+    // The drawing with the report's severities: the demo tourer's left sill is at severity 4.
+    await summary.getByTestId('public-body-diagram').waitFor();
+    await summary.getByTestId('zone-sill-left').click();
+    expect(await text(summary, 'public-diagram-zone')).toMatch(/^Left sill: worst severity 4/);
     await screenshot(buyer, 'report-phone-05-public-summary');
     await summary
       .getByTestId('public-verify-line')
@@ -154,6 +158,13 @@ describe('reports and sharing', () => {
     downloaded = fs.readFileSync((await download.path())!);
     expect(downloaded.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     expect(crypto.createHash('sha256').update(downloaded).digest('hex')).toBe(buyerReport.sha256);
+
+    // The same link on a wide screen (another reader, another view counted).
+    const wideBuyer = await browser.newPage(WIDE);
+    await wideBuyer.goto(link!);
+    await wideBuyer.getByTestId('public-body-diagram').waitFor();
+    await screenshot(wideBuyer, 'report-wide-00-public-summary');
+    await wideBuyer.context().close();
 
     // Back as the inspector: the view was counted; withdraw the link, with the confirm step.
     await page.reload();
