@@ -102,6 +102,8 @@ function serveWebExport(app: express.Express, dist: string) {
   app.use(express.static(dist, { index: false, maxAge: '1h' }));
   app.use((req, res, next) => {
     if (req.method !== 'GET' || path.extname(req.path) || !req.accepts('html')) return next();
+    // A share link is for the person it was sent to: keep its page out of search engines.
+    if (req.path.startsWith('/shared/')) res.setHeader('X-Robots-Tag', 'noindex, nofollow');
     if (!fs.existsSync(index))
       return res
         .status(503)

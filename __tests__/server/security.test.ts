@@ -28,6 +28,26 @@ describe('response headers', () => {
   });
 });
 
+describe('share links and verification stay out of search engines', () => {
+  it.each([
+    ['the share page', '/shared/k7dQ2mX9vN4pR8sT1wY6zB3cF5gH0jL2aE9uI7oP4qW', 'text/html'],
+    [
+      'a share answer',
+      '/api/public/shares/k7dQ2mX9vN4pR8sT1wY6zB3cF5gH0jL2aE9uI7oP4qW',
+      'application/json',
+    ],
+    ['a verification answer', '/api/public/verify/SF-0000-0000', 'application/json'],
+  ])('%s carries X-Robots-Tag: noindex', async (_label, url, accept) => {
+    const res = await request(t.app).get(url).set('Accept', accept);
+    expect(res.headers['x-robots-tag']).toBe('noindex, nofollow');
+  });
+
+  it('other pages of the app do not', async () => {
+    const res = await request(t.app).get('/vehicles').set('Accept', 'text/html');
+    expect(res.headers['x-robots-tag']).toBeUndefined();
+  });
+});
+
 describe('error answers', () => {
   it('answers an unknown /api path with a JSON 404, not the web app', async () => {
     const res = await request(t.app).get('/api/nope').set('Accept', 'text/html').expect(404);

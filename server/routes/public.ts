@@ -63,6 +63,11 @@ function pdfUpload(): RequestHandler {
 export function publicRoutes() {
   const router = Router();
   router.use(publicRateLimit());
+  // Share links and verification answers are for whoever holds them, not for search engines.
+  router.use((_req, res, next) => {
+    res.setHeader('X-Robots-Tag', 'noindex, nofollow');
+    next();
+  });
 
   router.get('/shares/:token', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
