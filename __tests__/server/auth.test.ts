@@ -2,7 +2,7 @@ import crypto from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
 import { signSessionToken } from '@/server/middleware/auth';
-import { AuditEntry, Membership, User, Workshop } from '@/server/models';
+import { AuditEntry, Membership, RevokedSession, User, Workshop } from '@/server/models';
 import { verifyPassword } from '@/server/services/passwords';
 import { sessionResponse } from '@/shared/schemas/auth';
 import { createMember, createUser, createWorkshop, TEST_PASSWORD, unique } from '../factories';
@@ -220,6 +220,51 @@ describe('POST /api/auth/sign-out', () => {
       .expect(403);
     expect(res.body.error.code).toBe('csrf_failed');
     expect(setCookies(res).sf_session).toBeUndefined();
+    expect(await RevokedSession.count({ where: { userId: user.id } })).toBe(0);
+  });
+
+  it('withdraws the cookie’s token: a copy of the old cookie no longer signs anyone in', async () => {
+    const { user } = await createMember(t.config, await createWorkshop(), 'owner');
+    const token = signSessionToken(t.config, user.id);
+    const cookies = sessionCookies(token, 'csrf-value');
+    await request(t.app).get('/api/auth/session').set('Cookie', cookies).expect(200);
+    await request(t.app)
+      .post('/api/auth/sign-out')
+      .set('Cookie', cookies)
+      .set('x-csrf-token', 'csrf-value')
+      .expect(204);
+    const again = await request(t.app).get('/api/auth/session').set('Cookie', cookies).expect(401);
+    expect(again.body.error.code).toBe('unauthenticated');
+    const { jti, exp } = jwt.decode(token) as { jti: string; exp: number };
+    const row = await RevokedSession.findByPk(jti);
+    expect(row!.userId).toBe(user.id);
+    expect(row!.expiresAt.getTime()).toBe(exp * 1000);
+  });
+
+  it('withdraws a Bearer token; the same person’s other sessions keep working', async () => {
+    const { user } = await createMember(t.config, await createWorkshop(), 'inspector');
+    const phone = signSessionToken(t.config, user.id);
+    const laptop = signSessionToken(t.config, user.id);
+    const bearer = (tok: string) => ({ Authorization: `Bearer ${tok}` });
+    await request(t.app).post('/api/auth/sign-out').set(bearer(phone)).expect(204);
+    await request(t.app).post('/api/auth/sign-out').set(bearer(phone)).expect(401);
+    const res = await request(t.app).get('/api/auth/session').set(bearer(phone)).expect(401);
+    expect(res.body.error.message).toBe('Your session is not valid. Sign in again.');
+    await request(t.app).get('/api/auth/session').set(bearer(laptop)).expect(200);
+  });
+
+  it('drops withdrawn tokens that have expired anyway when someone signs out', async () => {
+    const { user } = await createMember(t.config, await createWorkshop(), 'client');
+    const old = await RevokedSession.create({
+      jti: crypto.randomUUID(),
+      userId: user.id,
+      expiresAt: new Date(Date.now() - 60_000),
+    });
+    await request(t.app)
+      .post('/api/auth/sign-out')
+      .set({ Authorization: `Bearer ${signSessionToken(t.config, user.id)}` })
+      .expect(204);
+    expect(await RevokedSession.findByPk(old.jti)).toBeNull();
   });
 });
 

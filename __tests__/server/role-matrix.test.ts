@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
+import { signSessionToken } from '@/server/middleware/auth';
 import { startMailSink, type MailSink } from '@/server/mail/sink';
 import { AuditEntry } from '@/server/models';
 import type { ReportQueue } from '@/server/jobs/report-queue';
@@ -48,7 +49,14 @@ type Actor = { name: ActorName; member: Member | null };
 
 /** Fresh records for one request, so a write in one case never changes what the next one sees. */
 type Fixture = Awaited<ReturnType<typeof freshRecords>> & { actor: Actor };
-type Req = { url: string; body?: Record<string, unknown>; photo?: boolean; pdf?: Buffer };
+type Req = {
+  url: string;
+  body?: Record<string, unknown>;
+  photo?: boolean;
+  pdf?: Buffer;
+  /** Headers that replace the actor's own (sign-out must not withdraw the token other cases use). */
+  auth?: Record<string, string>;
+};
 
 type Row = {
   /** Method and path exactly as in the DEVELOPERS.md table. */
@@ -149,12 +157,18 @@ const ROUTES: Row[] = [
       },
     }),
   },
-  // Idempotent by design: signing out without a session still clears cookies.
+  // Idempotent by design: signing out without a session still clears cookies. Each signed-in
+  // actor signs out a second session of their own: the first one is withdrawn for other cases.
   {
     route: 'POST /api/auth/sign-out',
     needs: 'anyone',
     ok: 204,
-    build: () => ({ url: '/api/auth/sign-out' }),
+    build: (f) => ({
+      url: '/api/auth/sign-out',
+      auth: f.actor.member
+        ? { Authorization: `Bearer ${signSessionToken(t.config, f.actor.member.user.id)}` }
+        : undefined,
+    }),
   },
   {
     route: 'GET /api/auth/session',
@@ -743,7 +757,8 @@ describe.each(ROUTES.map((r) => [`${r.route}${r.label ? ` ${r.label}` : ''}`, r]
       const method = row.route.split(' ')[0].toLowerCase() as
         'get' | 'post' | 'put' | 'patch' | 'delete';
       let call = request(t.app)[method](req.url);
-      if (a.member) call = call.set(a.member.auth);
+      if (req.auth) call = call.set(req.auth);
+      else if (a.member) call = call.set(a.member.auth);
       if (req.photo) call = call.attach('photos', await jpeg(), 'sill.jpg');
       else if (req.pdf) call = call.attach('pdf', req.pdf, 'report.pdf');
       else if (req.body) call = call.send(req.body);

@@ -4,6 +4,7 @@ import jwt from 'jsonwebtoken';
 import { ERROR_CODES } from '@/shared/schemas/common';
 import type { Config } from '../config';
 import { AppError, unauthenticated } from '../errors';
+import { isSessionRevoked } from '../services/sessions';
 
 export const SESSION_COOKIE = 'sf_session';
 export const CSRF_COOKIE = 'sf_csrf';
@@ -23,17 +24,37 @@ export function signSessionToken(config: Config, userId: string): string {
   });
 }
 
-function verify(config: Config, token: string): string | null {
+export type VerifiedToken = { userId: string; jti: string; expiresAt: Date };
+
+/** The token's user, id and expiry when its signature, issuer, audience and expiry hold. */
+export function verifySessionToken(config: Config, token: string): VerifiedToken | null {
   try {
     const payload = jwt.verify(token, config.jwt.secret, {
       algorithms: [ALGORITHM],
       issuer: config.jwt.issuer,
       audience: config.jwt.audience,
     });
-    return typeof payload === 'object' && typeof payload.sub === 'string' ? payload.sub : null;
+    if (typeof payload !== 'object') return null;
+    const { sub, jti, exp } = payload;
+    if (typeof sub !== 'string' || typeof jti !== 'string' || typeof exp !== 'number') return null;
+    return { userId: sub, jti, expiresAt: new Date(exp * 1000) };
   } catch {
     return null;
   }
+}
+
+/** Valid and not withdrawn by signing out. */
+async function liveToken(config: Config, token: string): Promise<VerifiedToken | null> {
+  const verified = verifySessionToken(config, token);
+  if (!verified || (await isSessionRevoked(verified.jti))) return null;
+  return verified;
+}
+
+/** The session token this request carries (Bearer first, then the cookie), unverified. */
+export function presentedToken(req: Request): string | null {
+  const header = req.get('authorization');
+  if (header?.startsWith('Bearer ')) return header.slice(7).trim();
+  return (req.cookies?.[SESSION_COOKIE] as string | undefined) ?? null;
 }
 
 /** Sets the session and CSRF cookies for the web client; returns the CSRF value. */
@@ -61,21 +82,22 @@ export function clearSessionCookies(res: Response, config: Config) {
  * authenticate by cookie must echo the CSRF cookie in the `x-csrf-token` header (double submit).
  */
 export function authenticate(config: Config) {
-  return (req: Request, res: Response, next: NextFunction) => {
+  return async (req: Request, res: Response, next: NextFunction) => {
     const header = req.get('authorization');
     if (header?.startsWith('Bearer ')) {
-      const userId = verify(config, header.slice(7).trim());
-      if (!userId) return next(unauthenticated('Your session is not valid. Sign in again.'));
-      res.locals.auth = { userId, via: 'bearer' } satisfies AuthContext;
+      const token = await liveToken(config, header.slice(7).trim());
+      if (!token) return next(unauthenticated('Your session is not valid. Sign in again.'));
+      res.locals.auth = { userId: token.userId, via: 'bearer' } satisfies AuthContext;
       return next();
     }
     const cookie = req.cookies?.[SESSION_COOKIE] as string | undefined;
     if (!cookie) return next();
-    const userId = verify(config, cookie);
-    if (!userId) {
+    const token = await liveToken(config, cookie);
+    if (!token) {
       clearSessionCookies(res, config);
       return next();
     }
+    const { userId } = token;
     if (!['GET', 'HEAD', 'OPTIONS'].includes(req.method)) {
       const sent = req.get(CSRF_HEADER) ?? '';
       const expected = (req.cookies?.[CSRF_COOKIE] as string | undefined) ?? '';

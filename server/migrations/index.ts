@@ -4,6 +4,7 @@ import * as memberDecisions from './20261203000000-member-decisions';
 import * as treatments from './20261204000000-treatments';
 import * as reminders from './20261205000000-reminders';
 import * as reports from './20261206000000-reports';
+import * as revokedSessions from './20261207000000-revoked-sessions';
 
 /** Every migration, in order. Named by timestamp; each has `up` and `down`. */
 export const MIGRATIONS = [
@@ -13,4 +14,5 @@ export const MIGRATIONS = [
   { name: '20261204000000-treatments', ...treatments },
   { name: '20261205000000-reminders', ...reminders },
   { name: '20261206000000-reports', ...reports },
+  { name: '20261207000000-revoked-sessions', ...revokedSessions },
 ];

@@ -9,6 +9,7 @@ import { ReCheck } from './re-check';
 import { ReminderDelivery } from './reminder-delivery';
 import { Report } from './report';
 import { ReportShare } from './report-share';
+import { RevokedSession } from './revoked-session';
 import { Survey } from './survey';
 import { Treatment } from './treatment';
 import { TreatmentVersion } from './treatment-version';
@@ -28,6 +29,7 @@ export {
   ReminderDelivery,
   Report,
   ReportShare,
+  RevokedSession,
   Survey,
   Treatment,
   TreatmentVersion,
@@ -56,6 +58,7 @@ export function initModels(sequelize: Sequelize) {
     ReminderDelivery,
     Report,
     ReportShare,
+    RevokedSession,
     AuditEntry,
   ])
     m.initModel(sequelize);

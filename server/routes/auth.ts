@@ -12,14 +12,17 @@ import {
   authOf,
   clearSessionCookies,
   CSRF_COOKIE,
+  presentedToken,
   requireAuth,
   SESSION_COOKIE,
   setSessionCookies,
   signSessionToken,
+  verifySessionToken,
 } from '../middleware/auth';
 import { signInRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
 import { sessionFor, signIn, signUp, updatePreferences } from '../services/auth';
+import { revokeSession } from '../services/sessions';
 
 /**
  * Signs the user in on this response: the httpOnly session cookie and the CSRF cookie for the
@@ -75,9 +78,14 @@ export function authRoutes() {
     },
   );
 
-  // Idempotent: signing out without a session still clears whatever cookies are left.
-  router.post('/sign-out', (req: Request, res: Response) => {
-    clearSessionCookies(res, depsOf(req).config);
+  // Idempotent: signing out without a session still clears whatever cookies are left. A valid
+  // token presented (cookie or Bearer) is withdrawn, so a copy of it stops working too.
+  router.post('/sign-out', async (req: Request, res: Response) => {
+    const { config } = depsOf(req);
+    const raw = presentedToken(req);
+    const token = raw ? verifySessionToken(config, raw) : null;
+    if (token) await revokeSession(token);
+    clearSessionCookies(res, config);
     res.status(204).end();
   });
 
