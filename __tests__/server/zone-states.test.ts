@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { Finding, ReCheck, type Survey } from '@/server/models';
 import { zoneStateResponse } from '@/shared/schemas/recheck';
-import { addCalendarDays, localDate } from '@/shared/treatments';
+import { addCalendarDays, localDate, spokenDate } from '@/shared/treatments';
 import {
   createFinding,
   createSurvey,
@@ -132,7 +132,9 @@ describe('GET /api/workshops/:wid/vehicles/:vid/zone-states', () => {
     for (const r of rechecks.slice(0, 4)) await recordClean(r.id);
     const s = await states(vehicle.id);
     expect(s['sill-left'].state).toBe('treated-watching');
-    expect(s['sill-left'].reason).toContain(`on or after ${addCalendarDays(daysAgo(100), 365)}`);
+    expect(s['sill-left'].reason).toContain(
+      `on or after ${spokenDate(addCalendarDays(daysAgo(100), 365))}`,
+    );
   });
 
   it('turns a treated zone active and flagged when a later survey finds fresh frass', async () => {

@@ -7,6 +7,7 @@ import {
   localDate,
   planGroupFor,
   recheckDueDates,
+  spokenDate,
   treatmentSettingsSchema,
   type TreatmentSettings,
 } from '@/shared/treatments';
@@ -187,5 +188,22 @@ describe('recheckDueDates', () => {
       ),
       { numRuns: 200 },
     );
+  });
+});
+
+describe('spokenDate', () => {
+  it.each([
+    ['2027-01-12', '12 Jan 2027'],
+    ['2028-02-29', '29 Feb 2028'],
+    ['2026-12-01', '1 Dec 2026'],
+  ])('writes %s as %s (the calendar day, no time zone shift)', (iso, words) => {
+    expect(spokenDate(iso)).toBe(words);
+  });
+
+  it('refuses a value that is not a calendar date, naming the field', () => {
+    expect(() => spokenDate('2027-02-30', 'dueDate')).toThrow(
+      'dueDate must be a date as YYYY-MM-DD.',
+    );
+    expect(() => spokenDate('12/01/2027', 'dueDate')).toThrow(DomainError);
   });
 });

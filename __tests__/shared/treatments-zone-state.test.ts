@@ -120,8 +120,8 @@ describe('zoneStates: active → treated → cleared', () => {
       'cleared', // the check at 365 days completes the span
     ]);
     expect(steps[4].reason).toContain('5 clean re-checks in a row over 365 days');
-    expect(steps[2].reason).toContain('on or after 2027-01-12');
-    expect(steps[2].reason).toContain('Next re-check due 2026-07-11');
+    expect(steps[2].reason).toContain('on or after 12 Jan 2027');
+    expect(steps[2].reason).toContain('Next re-check due 11 Jul 2026');
   });
 
   it('is not cleared with N clean re-checks spanning less than D days', () => {
@@ -158,7 +158,7 @@ describe('zoneStates: active → treated → cleared', () => {
     const s = stateOf(history({ ...base, rechecks }));
     expect(s).toMatchObject({ state: 'active', flagged: true });
     expect(s.reason).toContain('possible treatment failure — call a licensed operator');
-    expect(s.reason).toContain('2026-02-23'); // the day of the fresh evidence
+    expect(s.reason).toContain('23 Feb 2026'); // the day of the fresh evidence
   });
 
   it('clean re-checks of an earlier treatment do not count after a new treatment', () => {
@@ -167,7 +167,7 @@ describe('zoneStates: active → treated → cleared', () => {
     expect(stateOf(history({ ...base, rechecks })).state).toBe('cleared');
     const s = stateOf(history({ ...base, treatments: [treatment(), second], rechecks }));
     expect(s.state).toBe('treated-watching');
-    expect(s.reason).toContain('Treated on 2027-06-01; 0 of 3');
+    expect(s.reason).toContain('Treated on 1 Jun 2027; 0 of 3');
   });
 
   it('pending re-checks count for nothing', () => {
@@ -293,7 +293,7 @@ describe('zoneStates: calendar days', () => {
     );
     const s = stateOf(at('2026-01-31T12:00:00Z', '2026-03-01T12:00:00Z'), one(30));
     expect(s.state).toBe('treated-watching');
-    expect(s.reason).toContain('on or after 2026-03-02');
+    expect(s.reason).toContain('on or after 2 Mar 2026');
   });
 
   it('spans a leap day: a year from 2028-02-29 is 2029-02-28', () => {
@@ -310,7 +310,7 @@ describe('zoneStates: calendar days', () => {
     const h = at('2026-03-29T23:30:00Z', '2026-04-08T21:30:00Z');
     expect(stateOf(h, one(10), 'Europe/Berlin').state).toBe('treated-watching');
     expect(stateOf(h, one(10), 'UTC').state).toBe('cleared');
-    expect(stateOf(h, one(10), 'Europe/Berlin').reason).toContain('Treated on 2026-03-30');
+    expect(stateOf(h, one(10), 'Europe/Berlin').reason).toContain('Treated on 30 Mar 2026');
   });
 
   it('counts days in a US time zone across the DST change', () => {

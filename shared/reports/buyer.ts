@@ -3,6 +3,7 @@
  * lists every structural item the scope holds, in the same order, in plain words.
  */
 import type { BodyPlan } from '../body-plans/schema';
+import { spokenDate } from '../treatments/dates';
 import { buildRepairScope } from './scope';
 import type { ConditionReport, MonitorItem, RepairScope, ReportSnapshot, ScopeItem } from './types';
 
@@ -19,7 +20,9 @@ function infestationWords(m: MonitorItem): string {
   if (m.state === 'active') return `${m.zoneLabel}: signs of live attack; not yet treated.`;
   if (m.state === 'treated-watching') {
     const next = m.nextRechecks[0];
-    const when = next ? ` Next check due ${next.dueDate}${next.overdue ? ' (overdue)' : ''}.` : '';
+    const when = next
+      ? ` Next check due ${spokenDate(next.dueDate)}${next.overdue ? ' (overdue)' : ''}.`
+      : '';
     return `${m.zoneLabel}: treated and being watched — ${m.cleanRechecks} of ${m.cleanRechecksNeeded} clean checks so far.${when}`;
   }
   return `${m.zoneLabel}: being watched (${m.stateLabel.toLowerCase()}).`;

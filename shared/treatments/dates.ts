@@ -32,3 +32,8 @@ export function addCalendarDays(date: string, days: number, field = 'date'): str
 export function calendarDaysBetween(from: string, to: string): number {
   return differenceInCalendarDays(calendarDay('to', to), calendarDay('from', from));
 }
+
+/** A calendar date ('YYYY-MM-DD') as people write it: '12 Jan 2027' (for sentences, not storage). */
+export function spokenDate(date: string, field = 'date'): string {
+  return format(calendarDay(field, date), 'd MMM yyyy');
+}

@@ -4,7 +4,7 @@
  * Sources: /work/shared/SOURCES.md "Treatment and law"; rules of thumb are marked common practice.
  */
 export * from './settings';
-export { localDate, addCalendarDays, calendarDaysBetween } from './dates';
+export { localDate, addCalendarDays, calendarDaysBetween, spokenDate } from './dates';
 export { planGroupFor, recheckDueDates } from './plan';
 export { TREATMENT_CAUTIONS, cautionsFor, type TreatmentCaution } from './cautions';
 export {

@@ -1,6 +1,6 @@
 import { parseISO } from 'date-fns';
 import type { RecheckStatus, ZoneState, ZoneStateResponse } from '../schemas/recheck';
-import { addCalendarDays, calendarDaysBetween, localDate } from './dates';
+import { addCalendarDays, calendarDaysBetween, localDate, spokenDate } from './dates';
 import type { ClearanceRule } from './settings';
 
 export interface ZoneFindingInput {
@@ -68,7 +68,7 @@ function untreatedState(findings: ZoneFindingInput[]): ZoneStateResult {
     return {
       state: 'active',
       flagged: false,
-      reason: `Active evidence recorded in the survey of ${latest.date}; no treatment recorded since.`,
+      reason: `Active evidence recorded in the survey of ${spokenDate(latest.date)}; no treatment recorded since.`,
     };
   }
   const worst = Math.max(0, ...findings.map((f) => f.severity));
@@ -122,7 +122,7 @@ function zoneState(
     return {
       state: 'active',
       flagged: true,
-      reason: `Fresh evidence in ${first.what} on ${localDate(first.at, timeZone)} after the treatment of ${treatedOn}: ${TREATMENT_FAILURE_ADVICE}.`,
+      reason: `Fresh evidence in ${first.what} on ${spokenDate(localDate(first.at, timeZone))} after the treatment of ${spokenDate(treatedOn)}: ${TREATMENT_FAILURE_ADVICE}.`,
     };
   }
 
@@ -135,14 +135,16 @@ function zoneState(
     return {
       state: 'cleared',
       flagged: false,
-      reason: `${plural(clean, 'clean re-check')} in a row over ${plural(span, 'day')} since the treatment of ${treatedOn} (rule: ${rule}).`,
+      reason: `${plural(clean, 'clean re-check')} in a row over ${plural(span, 'day')} since the treatment of ${spokenDate(treatedOn)} (rule: ${rule}).`,
     };
   }
 
   const missing: string[] = [];
   if (clean < needed) missing.push(`${needed - clean} more clean`);
   if (span < minSpanDays)
-    missing.push(`a clean re-check on or after ${addCalendarDays(treatedOn, minSpanDays)}`);
+    missing.push(
+      `a clean re-check on or after ${spokenDate(addCalendarDays(treatedOn, minSpanDays))}`,
+    );
   const next = rechecks
     .filter((r) => r.status === 'pending')
     .map((r) => r.dueDate)
@@ -150,7 +152,7 @@ function zoneState(
   return {
     state: 'treated-watching',
     flagged: false,
-    reason: `Treated on ${treatedOn}; ${clean} of ${needed} clean re-checks so far. Clearance needs ${missing.join(' and ')} (rule: ${rule}).${next ? ` Next re-check due ${next}.` : ''}`,
+    reason: `Treated on ${spokenDate(treatedOn)}; ${clean} of ${needed} clean re-checks so far. Clearance needs ${missing.join(' and ')} (rule: ${rule}).${next ? ` Next re-check due ${spokenDate(next)}.` : ''}`,
   };
 }
 
