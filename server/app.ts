@@ -44,7 +44,11 @@ export function createApp(deps: AppDeps) {
   app.locals.deps = deps;
   app.locals.reportQueue =
     deps.reportQueue ??
-    createReportQueue({ storage: deps.storage, concurrency: config.reports.concurrency });
+    createReportQueue({
+      storage: deps.storage,
+      concurrency: config.reports.concurrency,
+      verifyUrl: () => (config.publicUrl ? `${config.publicUrl.replace(/\/+$/, '')}/verify` : null),
+    });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
   app.use(

@@ -21,7 +21,13 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
     port: config.mail.port,
     from: config.mail.from,
   });
-  const reportQueue = createReportQueue({ storage, concurrency: config.reports.concurrency });
+  // The address reports print for checking them: the public URL, else where this server listens.
+  let baseUrl = config.publicUrl?.replace(/\/+$/, '') ?? null;
+  const reportQueue = createReportQueue({
+    storage,
+    concurrency: config.reports.concurrency,
+    verifyUrl: () => (baseUrl ? `${baseUrl}/verify` : null),
+  });
   const app = createApp({ config, storage, mailer, reportQueue });
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.port, config.host, () => resolve(s));
@@ -30,6 +36,7 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.port;
   const url = `http://${config.host}:${port}`;
+  baseUrl ??= url;
   // Reports a stopped process left queued or rendering are made now (their inputs are stored).
   await reportQueue.recover();
   const reminders = config.reminders.enabled

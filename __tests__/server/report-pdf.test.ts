@@ -22,6 +22,7 @@ import {
   renderDemoReports,
   type DemoReports,
   type Rendered,
+  VERIFY_URL,
 } from './support/report-demo';
 
 // Seeding draws the demo photos; a loaded CI machine needs minutes.
@@ -202,6 +203,14 @@ describe.each(['repair-scope', 'condition'] as const)('%s PDF file', (kind) => {
       expect(page).toContain('version 3');
       expect(page).toContain(`Page ${n} of ${pageCount}`);
     }
+  });
+
+  it('tells the reader on page 1 where to check it, with its identifier', () => {
+    // A line may break after a slash of the address.
+    const cover = flat(textLines(pdfText(r().report.pdf, 1))).replace(/\/ /g, '/');
+    expect(cover).toContain(
+      `To check that this copy is genuine and unchanged, enter ${IDS[kind]} or drop this PDF on ${VERIFY_URL}.`,
+    );
   });
 
   it('carries the identifier in the document info for the verifier', () => {

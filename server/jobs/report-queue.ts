@@ -36,11 +36,14 @@ export function createReportQueue({
   storage,
   concurrency,
   render = renderReport,
+  verifyUrl = () => null,
   onError = (error) => console.error('Report generation failed:', error),
 }: {
   storage: StorageAdapter;
   concurrency: number;
   render?: RenderReport;
+  /** The verification page's address, printed on each report (known once the server listens). */
+  verifyUrl?: () => string | null;
   onError?: (error: unknown) => void;
 }): ReportQueue {
   const waiting: string[] = [];
@@ -57,7 +60,7 @@ export function createReportQueue({
   const pump = () => {
     while (!stopped && active.size < concurrency && waiting.length > 0) {
       const id = waiting.shift()!;
-      const run: Promise<void> = generate(id, storage, render)
+      const run: Promise<void> = generate(id, storage, render, verifyUrl())
         .catch(onError)
         .finally(() => {
           active.delete(run);
@@ -103,7 +106,12 @@ export function createReportQueue({
 }
 
 /** Claims, renders, stores and records one report; a failure is recorded on the row in plain words. */
-async function generate(reportId: string, storage: StorageAdapter, render: RenderReport) {
+async function generate(
+  reportId: string,
+  storage: StorageAdapter,
+  render: RenderReport,
+  verifyUrl: string | null,
+) {
   const [claimed] = await Report.update(
     { status: 'rendering', startedAt: new Date(), progress: 0, stage: 'Starting' },
     { where: { id: reportId, status: 'queued' } },
@@ -140,7 +148,7 @@ async function generate(reportId: string, storage: StorageAdapter, render: Rende
     };
     const rendered = await render(
       report.snapshot,
-      { shortId: report.shortId, version: report.version },
+      { shortId: report.shortId, version: report.version, verifyUrl },
       { loadPhoto },
       onProgress,
     );

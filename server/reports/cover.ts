@@ -50,6 +50,19 @@ export function drawCover(
       `${identity.shortId}, version ${identity.version}, made ${longDate(cover.generatedAt)} by ${cover.generatedByName || cover.workshopName}`,
     ],
   ]);
+  doc.moveDown(0.3);
+  doc
+    .font(REGULAR)
+    .fontSize(SIZE.small)
+    .fillColor(MUTED)
+    .text(
+      `To check that this copy is genuine and unchanged, enter ${identity.shortId} or drop this PDF on ${
+        identity.verifyUrl ?? 'the Soundframe verification page of the workshop that issued it'
+      }.`,
+      x,
+      doc.y,
+      { width: w, link: identity.verifyUrl ?? undefined },
+    );
   doc.moveDown(0.6);
 }
 

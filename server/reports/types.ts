@@ -10,6 +10,8 @@ export interface RenderIdentity {
   /** Printed in every page footer, e.g. 'SF-7K3M-Q9TD'. */
   shortId: string;
   version: number;
+  /** Where a reader checks the report (`<public URL>/verify`), printed on the cover; null when unknown. */
+  verifyUrl?: string | null;
 }
 
 export interface RenderDeps {

@@ -18,6 +18,9 @@ import type { ReportKind, ReportSnapshot } from '@/shared/reports';
 import { createTestDatabase, type TestDatabase } from '../../e2e/support/test-db';
 import { pageToPng, pdfText, textLines } from './poppler';
 
+/** What the job passes the renderer as the verification page (PUBLIC_URL + /verify). */
+export const VERIFY_URL = 'http://soundframe.example.test/verify';
+
 export const ARTIFACTS = path.join(
   process.env.ARTIFACTS_DIR ?? path.resolve(__dirname, '..', '..', '..', '.artifacts'),
   'reports',
@@ -62,7 +65,7 @@ export async function renderDemoReports(ids: Record<ReportKind, string>): Promis
     const progress: [number, string][] = [];
     const report = await renderReport(
       snapshot,
-      { shortId: ids[kind], version: 3 },
+      { shortId: ids[kind], version: 3, verifyUrl: VERIFY_URL },
       { loadPhoto: (id) => readRendition(inspector, storage, id, 'display').catch(() => null) },
       (p, stage) => void progress.push([p, stage]),
     );
