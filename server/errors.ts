@@ -25,6 +25,8 @@ export const staleVersion = (what = 'record') =>
     ERROR_CODES.staleVersion,
     `This ${what} was changed by someone else since you loaded it. Reload and apply your change again.`,
   );
+export const conflict = (message: string, fields?: Record<string, string>) =>
+  new AppError(409, ERROR_CODES.conflict, message, fields);
 export const badRequest = (fields: Record<string, string>, message?: string) =>
   new AppError(
     400,

@@ -42,6 +42,13 @@ function auditView(name: string, s: WorkshopSettings): Record<string, unknown> {
   };
 }
 
+/** A workshop's full settings by id (404 when it is gone). */
+export async function settingsOf(workshopId: string, transaction?: Transaction) {
+  const workshop = await Workshop.findByPk(workshopId, { transaction });
+  if (!workshop) throw notFound('Workshop');
+  return readSettings(workshop.settings);
+}
+
 function toResponse(w: Workshop, member: MemberContext): WorkshopResponse {
   return { id: w.id, name: w.name, settings: readSettings(w.settings), role: member.role };
 }

@@ -13,6 +13,11 @@ export function getZone(plan: BodyPlan, zoneKey: string): Zone | undefined {
   return plan.zones.find((z) => z.key === zoneKey);
 }
 
+/** The zone's label, or the key itself when the plan (or the zone) is unknown. */
+export function zoneLabel(plan: BodyPlan | undefined, zoneKey: string): string {
+  return (plan && getZone(plan, zoneKey)?.label) || zoneKey;
+}
+
 /**
  * Area centroid of a polygon. Weighting by area (not averaging the vertices) keeps a
  * shape with a finely divided curve, such as a wheel arch, from pulling it to that side.

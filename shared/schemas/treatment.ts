@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { AGENT_LABELS } from '../wood/agents';
 import { AGENT_KEYS } from '../wood/types';
 import { isoDateTime, uuid } from './common';
 
@@ -28,6 +29,10 @@ export const TREATMENT_METHOD_LABELS: Record<TreatmentMethod, string> = {
 /** What the treatment was aimed at: an agent from the wood-science list, or not known. */
 export const TREATMENT_TARGETS = [...AGENT_KEYS, 'unknown'] as const;
 export type TreatmentTarget = (typeof TREATMENT_TARGETS)[number];
+export const TREATMENT_TARGET_LABELS: Record<TreatmentTarget, string> = {
+  ...AGENT_LABELS,
+  unknown: 'Not known',
+};
 
 const text = (max: number) => z.string().trim().max(max);
 /** Label fields are copied from the product label; Soundframe never fills them in itself. */

@@ -39,6 +39,7 @@ export {
   verdictRank,
   VERDICT_OPTION_LABELS,
   DECISION_CLASS_LABELS,
+  percent,
 } from './verdict';
 export {
   estimateRepair,
