@@ -8,12 +8,7 @@ import type { SurveyResponse } from '@/shared/schemas/survey';
 import type { TreatmentResponse } from '@/shared/schemas/treatment';
 import { workshopSettings, type WorkshopSettings } from '@/shared/schemas/workshop';
 import { recheckDueDates, zoneStateItems } from '@/shared/treatments';
-import {
-  assessMember,
-  estimateRepair,
-  type DecisionClass,
-  type VerdictOption,
-} from '@/shared/wood';
+import { decisionFields, type DecisionClass, type VerdictOption } from '@/shared/wood';
 
 const id = () => crypto.randomUUID();
 const AT = '2026-11-20T10:00:00.000Z';
@@ -67,7 +62,7 @@ export type DecisionSpec = {
   decisionClass?: DecisionClass;
 };
 
-/** Computes a decision the way the server does: assessMember() then estimateRepair(). */
+/** Computes a decision the way the server does (decisionFields). */
 export function buildDecision(
   plan: BodyPlan,
   spec: DecisionSpec,
@@ -87,7 +82,8 @@ export function buildDecision(
     species: zone.defaultSpecies,
   };
   const mine = findings.filter((f) => f.zoneKey === zone.key);
-  const { verdict } = assessMember(
+  const fields = decisionFields(
+    zone,
     inputs,
     {
       structuralClass: zone.structuralClass,
@@ -95,31 +91,17 @@ export function buildDecision(
       activeAgent: mine.some((f) => f.activity === 'active'),
       assemblyMembersNeedingReplacement: 0,
     },
-    settings.wood,
+    settings,
+    spec.chosenOption
+      ? { option: spec.chosenOption, reason: spec.overrideReason ?? 'Owner’s choice' }
+      : null,
   );
-  const chosen = spec.chosenOption ?? verdict.option;
-  const estimate = estimateRepair({
-    option: chosen,
-    ...inputs,
-    settings: settings.wood,
-    labourRatePerHour: settings.labourRatePerHour,
-  });
   return {
     id: id(),
     vehicleId: 'vehicle',
     zoneKey: zone.key,
-    inputs,
-    recommendedOption: verdict.option,
-    recommendationReasons: verdict.reasons,
-    chosenOption: chosen,
-    overrideReason: chosen === verdict.option ? '' : (spec.overrideReason ?? 'Owner’s choice'),
-    decisionClass: spec.decisionClass ?? verdict.decisionClass,
-    estimatedHours: estimate.hours,
-    labourCost: estimate.labourCost,
-    materialCost: estimate.materialCost,
-    totalCost: estimate.totalCost,
-    materials: estimate.cutList,
-    splice: estimate.splice,
+    ...fields,
+    decisionClass: spec.decisionClass ?? fields.decisionClass,
     notes: '',
     decidedById: null,
     decidedByName: 'Test Inspector',

@@ -2,10 +2,10 @@ import { QueryTypes } from 'sequelize';
 import request from 'supertest';
 import { errorHandler } from '@/server/middleware/error-handler';
 import { AuditEntry, MemberDecision, type Vehicle } from '@/server/models';
-import { classForChosen } from '@/server/services/decisions';
 import { getBodyPlan, getZone } from '@/shared/body-plans';
 import { decisionResponse, type DecisionInputs } from '@/shared/schemas/decision';
 import {
+  classForChosen,
   DEFAULT_WOOD_SETTINGS,
   DomainError,
   estimateRepair,

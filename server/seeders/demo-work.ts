@@ -5,9 +5,8 @@ import type { DecisionInputs } from '@/shared/schemas/decision';
 import { treatmentData, type TreatmentData } from '@/shared/schemas/treatment';
 import type { WorkshopSettings } from '@/shared/schemas/workshop';
 import { recheckDueDates } from '@/shared/treatments';
-import type { VerdictOption } from '@/shared/wood';
+import { decisionFields, type VerdictOption } from '@/shared/wood';
 import { Finding, MemberDecision, ReCheck, Treatment, type User, type Vehicle } from '../models';
-import { decisionFields } from '../services/decisions';
 
 /**
  * The demo tourer's repair decisions and its beetle treatment: what the reports are drawn
