@@ -138,13 +138,16 @@ async function generate(
   };
 
   try {
+    const photoIds = new Set(report.snapshot.findings.flatMap((f) => f.photos.map((p) => p.id)));
+    // Only this workshop's photos, however the snapshot came to name them.
+    const photos = await Photo.findAll({
+      where: { id: [...photoIds], workshopId: report.workshopId },
+      attributes: ['id', 'displayKey'],
+    });
+    const displayKeys = new Map(photos.map((p) => [p.id, p.displayKey]));
     const loadPhoto = async (photoId: string) => {
-      // Only this workshop's photos, however the snapshot came to name them.
-      const photo = await Photo.findOne({
-        where: { id: photoId, workshopId: report.workshopId },
-        attributes: ['id', 'displayKey'],
-      });
-      return photo ? storage.get(photo.displayKey) : null;
+      const key = displayKeys.get(photoId);
+      return key ? storage.get(key) : null;
     };
     const rendered = await render(
       report.snapshot,

@@ -35,18 +35,10 @@ export const renderReport: RenderReport = async (snapshot, identity, deps, onPro
     reportId: identity.shortId,
   });
   const bytes = toBuffer(doc);
-  const photoCount =
-    snapshot.kind === 'condition'
-      ? await drawConditionReport(
-          doc,
-          conditionReportFromScope(scope),
-          scope,
-          snapshot,
-          identity,
-          deps,
-          onProgress,
-        )
-      : await drawRepairScope(doc, scope, snapshot, identity, deps, onProgress);
+  const buyer = snapshot.kind === 'condition' ? conditionReportFromScope(scope) : undefined;
+  const photoCount = buyer
+    ? await drawConditionReport(doc, buyer, scope, snapshot, identity, deps, onProgress)
+    : await drawRepairScope(doc, scope, snapshot, identity, deps, onProgress);
   await onProgress(95, 'Finishing');
   footers(
     doc,
@@ -56,5 +48,5 @@ export const renderReport: RenderReport = async (snapshot, identity, deps, onPro
   doc.end();
   const pdf = await bytes;
   await onProgress(100, 'Ready');
-  return { pdf, pageCount, summary: reportSummary(snapshot.kind, scope), photoCount };
+  return { pdf, pageCount, summary: reportSummary(snapshot.kind, scope, buyer), photoCount };
 };

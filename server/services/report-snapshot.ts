@@ -6,22 +6,20 @@ import { listFindings } from './findings';
 import { listVehicleRechecks } from './rechecks';
 import { listSurveys } from './surveys';
 import { listTreatments } from './treatments';
-import { findVehicleFor } from './vehicle-access';
 import { getVehicle } from './vehicles';
 import { getWorkshop } from './workshops';
-import { getZoneStates } from './zone-states';
+import { zoneStatesFrom } from './zone-states';
 
 /**
  * Freezes everything a report is drawn from, through the same services (and access checks) the
- * API answers with: a vehicle the caller cannot read is a 404 before anything is collected.
+ * API answers with: a vehicle the caller cannot read is a 404 (from each of them).
  */
 export async function collectReportSnapshot(
   member: MemberContext,
   vehicleId: string,
   kind: ReportKind,
 ): Promise<ReportSnapshot> {
-  await findVehicleFor(member, vehicleId);
-  const [workshop, vehicle, surveys, findings, decisions, treatments, rechecks, zoneStates, user] =
+  const [workshop, vehicle, surveys, findings, decisions, treatments, rechecks, user] =
     await Promise.all([
       getWorkshop(member),
       getVehicle(member, vehicleId),
@@ -30,7 +28,6 @@ export async function collectReportSnapshot(
       listDecisions(member, vehicleId),
       listTreatments(member, vehicleId),
       listVehicleRechecks(member, vehicleId),
-      getZoneStates(member, vehicleId),
       User.findByPk(member.userId, { attributes: ['id', 'name'] }),
     ]);
   return {
@@ -45,6 +42,12 @@ export async function collectReportSnapshot(
     // The services answer newest first; the history reads in the order the work was done.
     treatments: [...treatments].reverse(),
     rechecks,
-    zoneStates,
+    zoneStates: zoneStatesFrom(
+      vehicle.bodyPlanKey,
+      workshop.settings.treatments,
+      findings,
+      treatments,
+      rechecks,
+    ),
   };
 }

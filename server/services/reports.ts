@@ -7,7 +7,7 @@ import {
   type ReportKind,
   type ReportResponse,
 } from '@/shared/schemas/report';
-import { AppError, notFound } from '../errors';
+import { AppError, conflict, notFound } from '../errors';
 import type { ReportQueue } from '../jobs/report-queue';
 import type { MemberContext } from '../middleware/workshop';
 import { Report, User, Workshop } from '../models';
@@ -63,9 +63,22 @@ export async function latestReadyVersion(vehicleId: string, kind: ReportKind) {
   return max ?? 0;
 }
 
-async function responseFor(id: string) {
-  const r = await Report.findByPk(id, { attributes: LIGHT, include: [CREATED_BY] });
-  if (!r) throw notFound('Report');
+/** The version a new report of a (vehicle, kind) gets: one past the highest made so far. */
+export async function nextReportVersion(
+  vehicleId: string,
+  kind: ReportKind,
+  transaction?: Transaction,
+) {
+  const where = { vehicleId, kind };
+  const last = (await Report.max('version', { where, transaction })) as number | null;
+  return (last ?? 0) + 1;
+}
+
+/** A report row as responses read it: LIGHT, with who made it. */
+const findLight = (id: string) => Report.findByPk(id, { attributes: LIGHT, include: [CREATED_BY] });
+
+/** A row loaded as findLight and findReportFor load it, as the API answers it. */
+async function responseOf(r: Report) {
   return toReportResponse(
     r,
     r.status === 'ready' && (await latestReadyVersion(r.vehicleId, r.kind)) === r.version,
@@ -82,6 +95,7 @@ export async function findReportFor(
   const report = await Report.findOne({
     where: { id: reportId, workshopId: member.workshopId },
     attributes: LIGHT,
+    include: [CREATED_BY],
     transaction: opts.transaction,
   });
   if (!report) throw notFound('Report');
@@ -128,7 +142,9 @@ export async function createReport(
     }
   }
   deps.queue.enqueue(id);
-  return { report: await responseFor(id), created: true };
+  const report = await findLight(id);
+  if (!report) throw notFound('Report');
+  return { report: await responseOf(report), created: true };
 }
 
 function insertQueued(
@@ -150,17 +166,13 @@ function insertQueued(
       transaction,
     });
     if (inFlight >= maxInFlight) throw tooMany(maxInFlight);
-    const last = (await Report.max('version', {
-      where: { vehicleId: vehicle.id, kind: body.kind },
-      transaction,
-    })) as number | null;
     const report = await Report.create(
       {
         ...(body.id ? { id: body.id } : {}),
         workshopId: member.workshopId,
         vehicleId: vehicle.id,
         kind: body.kind,
-        version: (last ?? 0) + 1,
+        version: await nextReportVersion(vehicle.id, body.kind, transaction),
         shortId: newShortId(),
         stage: 'Waiting to start',
         snapshot,
@@ -182,11 +194,11 @@ function insertQueued(
 }
 
 async function existingForRetry(member: MemberContext, id: string, vehicleId: string) {
-  const row = await Report.findByPk(id, { attributes: ['id', 'workshopId', 'vehicleId'] });
+  const row = await findLight(id);
   if (!row) return null;
   if (row.workshopId !== member.workshopId || row.vehicleId !== vehicleId) throw idTaken();
   await findVehicleFor(member, vehicleId);
-  return responseFor(id);
+  return responseOf(row);
 }
 
 /** Every report of the vehicle, newest first; `latest` marks the newest ready version per kind. */
@@ -210,16 +222,10 @@ export async function listReports(member: MemberContext, vehicleId: string) {
 }
 
 export async function getReport(member: MemberContext, reportId: string) {
-  const report = await findReportFor(member, reportId);
-  return responseFor(report.id);
+  return responseOf(await findReportFor(member, reportId));
 }
 
-const notReady = () =>
-  new AppError(
-    409,
-    ERROR_CODES.conflict,
-    'This report is not ready yet. Wait until it is generated.',
-  );
+const notReady = () => conflict('This report is not ready yet. Wait until it is generated.');
 
 export const reportFileName = (r: Pick<Report, 'kind' | 'shortId' | 'version'>) =>
   `soundframe-${r.kind}-${r.shortId}-v${r.version}.pdf`;

@@ -1,25 +1,55 @@
 import { getBodyPlan } from '@/shared/body-plans';
-import type { ZoneStateResponse } from '@/shared/schemas/recheck';
+import type { FindingResponse } from '@/shared/schemas/finding';
+import type { RecheckResponse, ZoneStateResponse } from '@/shared/schemas/recheck';
+import type { TreatmentResponse } from '@/shared/schemas/treatment';
+import type { WorkshopSettings } from '@/shared/schemas/workshop';
 import { zoneStateItems } from '@/shared/treatments';
-import { notFound } from '../errors';
 import type { MemberContext } from '../middleware/workshop';
-import { Finding, ReCheck, Survey, Treatment, Workshop } from '../models';
+import { Finding, ReCheck, Survey, Treatment } from '../models';
+import { toFindingResponse } from './findings';
+import { toRecheckResponse } from './rechecks';
+import { toTreatmentResponse } from './treatments';
 import { findVehicleFor } from './vehicle-access';
-import { readSettings } from './workshops';
+import { settingsOf } from './workshops';
 
 /**
- * The state of every zone of a vehicle's body plan, derived from its open findings, treatments
- * and re-checks with the workshop's clearance rule (never stored, so it cannot drift).
+ * The state of every zone of a body plan from a vehicle's open findings, treatments and
+ * re-checks (as the API answers them) with the workshop's clearance rule.
  */
+export function zoneStatesFrom(
+  bodyPlanKey: string,
+  { clearance, timeZone }: WorkshopSettings['treatments'],
+  findings: readonly FindingResponse[],
+  treatments: readonly TreatmentResponse[],
+  rechecks: readonly RecheckResponse[],
+): ZoneStateResponse[] {
+  return zoneStateItems(
+    {
+      zoneKeys: getBodyPlan(bodyPlanKey)?.zones.map((z) => z.key) ?? [],
+      findings: findings.map((f) => ({
+        zoneKey: f.zoneKey,
+        date: f.surveyDate || f.createdAt.slice(0, 10),
+        createdAt: f.createdAt,
+        severity: f.severity,
+        activity: f.activity,
+        insectEvidence: f.insectEvidence,
+      })),
+      treatments,
+      rechecks,
+    },
+    clearance,
+    timeZone,
+  );
+}
+
+/** zoneStatesFrom() for one vehicle, loaded (never stored, so it cannot drift). */
 export async function getZoneStates(
   member: MemberContext,
   vehicleId: string,
 ): Promise<ZoneStateResponse[]> {
   const vehicle = await findVehicleFor(member, vehicleId);
-  const workshop = await Workshop.findByPk(member.workshopId);
-  if (!workshop) throw notFound('Workshop');
-  const { clearance, timeZone } = readSettings(workshop.settings).treatments;
-  const [findings, treatments, rechecks] = await Promise.all([
+  const [settings, findings, treatments, rechecks] = await Promise.all([
+    settingsOf(member.workshopId),
     Finding.findAll({
       where: { vehicleId: vehicle.id },
       include: [{ model: Survey, as: 'survey', attributes: ['id', 'date'] }],
@@ -27,33 +57,11 @@ export async function getZoneStates(
     Treatment.findAll({ where: { vehicleId: vehicle.id } }),
     ReCheck.findAll({ where: { vehicleId: vehicle.id } }),
   ]);
-  const zoneKeys = getBodyPlan(vehicle.bodyPlanKey)?.zones.map((z) => z.key) ?? [];
-  return zoneStateItems(
-    {
-      zoneKeys,
-      findings: findings.map((f) => ({
-        zoneKey: f.zoneKey,
-        date: f.survey?.date ?? f.createdAt.toISOString().slice(0, 10),
-        createdAt: f.createdAt.toISOString(),
-        severity: f.severity,
-        activity: f.activity,
-        insectEvidence: f.insectEvidence,
-        decayType: f.decayType,
-      })),
-      treatments: treatments.map((t) => ({
-        id: t.id,
-        appliedAt: t.appliedAt.toISOString(),
-        zoneKeys: t.zoneKeys,
-      })),
-      rechecks: rechecks.map((r) => ({
-        treatmentId: r.treatmentId,
-        zoneKeys: r.zoneKeys,
-        dueDate: r.dueDate,
-        status: r.status,
-        completedAt: r.completedAt ? r.completedAt.toISOString() : null,
-      })),
-    },
-    clearance,
-    timeZone,
+  return zoneStatesFrom(
+    vehicle.bodyPlanKey,
+    settings.treatments,
+    findings.map(toFindingResponse),
+    treatments.map(toTreatmentResponse),
+    rechecks.map((r) => toRecheckResponse(r, vehicle)),
   );
 }

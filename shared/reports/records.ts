@@ -1,5 +1,5 @@
 /** The scope's plain records: cut list, treatment history, areas not inspected, cover. */
-import type { BodyPlan } from '../body-plans/schema';
+import { zoneLabel, type BodyPlan } from '../body-plans';
 import type { DecisionResponse } from '../schemas/decision';
 import { TREATMENT_METHOD_LABELS, type TreatmentResponse } from '../schemas/treatment';
 import { SPECIES_LABELS } from '../species';
@@ -13,22 +13,13 @@ import type {
 } from './types';
 
 const time = (iso: string) => new Date(iso).getTime();
-const zoneLabel = (plan: BodyPlan, key: string) =>
-  plan.zones.find((z) => z.key === key)?.label ?? key;
 
 export function cutList(plan: BodyPlan, decisions: DecisionResponse[]): CutListRow[] {
   return decisions.flatMap((d) =>
     d.materials.map((m) => ({
+      ...m,
       zoneLabel: zoneLabel(plan, d.zoneKey),
-      species: m.species,
       speciesLabel: SPECIES_LABELS[m.species],
-      finishedThicknessMm: m.finishedThicknessMm,
-      finishedWidthMm: m.finishedWidthMm,
-      finishedLengthMm: m.finishedLengthMm,
-      roughQuarters: m.roughQuarters,
-      boardFeet: m.boardFeet,
-      boardFeetWithWaste: m.boardFeetWithWaste,
-      cost: m.cost,
     })),
   );
 }

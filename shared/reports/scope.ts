@@ -2,18 +2,13 @@
  * buildRepairScope(): the repair scope (what the owner budgets from) from a frozen snapshot.
  * Pure; the PDF renderer, the share page and the buyer's report all start from it.
  */
-import {
-  STRUCTURAL_CLASSES,
-  TRADE_NAME_LABELS,
-  type BodyPlan,
-  type Zone,
-} from '../body-plans/schema';
+import { getZone, STRUCTURAL_CLASSES, TRADE_NAME_LABELS, type BodyPlan } from '../body-plans';
 import type { DecisionResponse } from '../schemas/decision';
 import type { FindingResponse } from '../schemas/finding';
 import { ZONE_STATE_LABELS, type ZoneState } from '../schemas/recheck';
-import type { TreatmentResponse } from '../schemas/treatment';
 import { SPECIES_LABELS } from '../species';
 import { localDate } from '../treatments/dates';
+import { cleanRechecksSince, latestTreatment } from '../treatments/zone-state';
 import { VERDICT_OPTION_LABELS } from '../wood/verdict';
 import { conditionSummary } from './condition';
 import { cutList, notInspectedItems, reportCover, treatmentRows } from './records';
@@ -29,10 +24,6 @@ import type {
 import { orderOfWork } from './work-order';
 
 const time = (iso: string) => new Date(iso).getTime();
-
-function zoneOf(plan: BodyPlan, zoneKey: string): Zone | undefined {
-  return plan.zones.find((z) => z.key === zoneKey);
-}
 
 /** Zone key → worst open severity, every zone of the plan (0 when none). */
 export function zoneSeverities(plan: BodyPlan, findings: readonly FindingResponse[]) {
@@ -51,7 +42,7 @@ function openFindings(snapshot: ReportSnapshot, zoneKey: string) {
 }
 
 function scopeItem(snapshot: ReportSnapshot, plan: BodyPlan, d: DecisionResponse): ScopeItem {
-  const zone = zoneOf(plan, d.zoneKey);
+  const zone = getZone(plan, d.zoneKey);
   const findings = openFindings(snapshot, d.zoneKey);
   const reasons = [...d.recommendationReasons];
   if (d.chosenOption !== d.recommendedOption && d.overrideReason)
@@ -109,12 +100,7 @@ function monitorItems(
     .map((zone): MonitorItem => {
       const st = snapshot.zoneStates.find((s) => s.zoneKey === zone.key);
       const state = st?.state ?? 'no-evidence';
-      const latest = snapshot.treatments
-        .filter((t) => t.zoneKeys.includes(zone.key))
-        .reduce<TreatmentResponse | null>(
-          (a, b) => (a && time(a.appliedAt) >= time(b.appliedAt) ? a : b),
-          null,
-        );
+      const latest = latestTreatment(zone.key, snapshot.treatments);
       const rechecks = snapshot.rechecks.filter((r) => r.zoneKeys.includes(zone.key));
       const decision = monitorDecisions.find((d) => d.zoneKey === zone.key) ?? null;
       return {
@@ -129,14 +115,7 @@ function monitorItems(
           .map((r) => ({ dueDate: r.dueDate, overdue: r.dueDate < today }))
           .sort((a, b) => a.dueDate.localeCompare(b.dueDate)),
         // As the zone state counts them: clean and completed after the zone's latest treatment.
-        cleanRechecks: latest
-          ? rechecks.filter(
-              (r) =>
-                r.status === 'clean' &&
-                r.completedAt !== null &&
-                time(r.completedAt) > time(latest.appliedAt),
-            ).length
-          : 0,
+        cleanRechecks: latest ? cleanRechecksSince(zone.key, rechecks, latest.appliedAt).length : 0,
         cleanRechecksNeeded: clearance.cleanChecksRequired,
         decision,
       };
@@ -192,15 +171,16 @@ function totals(
   };
 }
 
-function findingCounts(plan: BodyPlan, findings: ReportSnapshot['findings']) {
+/** Zone key → findings recorded on it, for the zones of the plan (`zoneSeverity` has them all). */
+function findingCounts(zoneSeverity: Record<string, number>, findings: ReportSnapshot['findings']) {
   const counts: Record<string, number> = {};
   for (const f of findings)
-    if (zoneOf(plan, f.zoneKey)) counts[f.zoneKey] = (counts[f.zoneKey] ?? 0) + 1;
+    if (f.zoneKey in zoneSeverity) counts[f.zoneKey] = (counts[f.zoneKey] ?? 0) + 1;
   return counts;
 }
 
 export function buildRepairScope(snapshot: ReportSnapshot, plan: BodyPlan): RepairScope {
-  const decisions = snapshot.decisions.filter((d) => zoneOf(plan, d.zoneKey));
+  const decisions = snapshot.decisions.filter((d) => getZone(plan, d.zoneKey));
   const items = decisions.map((d) => scopeItem(snapshot, plan, d));
   const structural = items
     .filter((i) => i.decisionClass === 'structural-must-fix')
@@ -252,7 +232,7 @@ export function buildRepairScope(snapshot: ReportSnapshot, plan: BodyPlan): Repa
     limitations: [...SURVEY_LIMITATIONS],
     cautions: reportCautions(),
     zoneSeverity,
-    zoneFindingCount: findingCounts(plan, snapshot.findings),
+    zoneFindingCount: findingCounts(zoneSeverity, snapshot.findings),
     bodyPlanKey: plan.key,
     units: settings.units,
     paperSize: settings.paperSize,

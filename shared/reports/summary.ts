@@ -2,9 +2,15 @@ import { REPORT_KIND_LABELS, type ReportKind, type ReportSummary } from '../sche
 import { conditionReportFromScope } from './buyer';
 import type { RepairScope } from './types';
 
-/** What the share and verification pages show (reportSummarySchema); totals only for the repair scope. */
-export function reportSummary(kind: ReportKind, scope: RepairScope): ReportSummary {
-  const buyer = conditionReportFromScope(scope);
+/**
+ * What the share and verification pages show (reportSummarySchema); totals only for the repair
+ * scope. `buyer` is the condition report of the same scope, when the caller has built it already.
+ */
+export function reportSummary(
+  kind: ReportKind,
+  scope: RepairScope,
+  buyer = conditionReportFromScope(scope),
+): ReportSummary {
   return {
     kind,
     title: REPORT_KIND_LABELS[kind],

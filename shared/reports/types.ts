@@ -14,7 +14,8 @@ import type { SurveyResponse } from '../schemas/survey';
 import type { TreatmentResponse } from '../schemas/treatment';
 import type { VehicleResponse } from '../schemas/vehicle';
 import type { WorkshopSettings } from '../schemas/workshop';
-import type { DecisionClass, VerdictOption } from '../wood/types';
+import type { TreatmentCaution } from '../treatments/cautions';
+import type { CutListLine, DecisionClass, VerdictOption } from '../wood/types';
 
 import type { ConditionSummary, PaperSize, ReportKind } from '../schemas/report';
 
@@ -96,18 +97,7 @@ export interface ScopeTotals {
   currency: string;
 }
 
-export interface CutListRow {
-  zoneLabel: string;
-  species: SpeciesKey;
-  speciesLabel: string;
-  finishedThicknessMm: number;
-  finishedWidthMm: number;
-  finishedLengthMm: number;
-  roughQuarters: number; // 4 = 4/4
-  boardFeet: number;
-  boardFeetWithWaste: number;
-  cost: number;
-}
+export type CutListRow = CutListLine & { zoneLabel: string; speciesLabel: string };
 
 /** One step of the order of work, computed from the zones in the scope (rules in work-order.ts). */
 export interface WorkStep {
@@ -141,12 +131,7 @@ export interface NotInspectedItem {
   what: string;
 }
 
-export interface ReportCaution {
-  key: string;
-  title: string;
-  text: string;
-  source: string;
-}
+export type ReportCaution = Omit<TreatmentCaution, 'methods'>;
 
 export {
   CONDITION_GRADES,
@@ -191,7 +176,7 @@ export interface RepairScope {
   /** Zone key → number of open findings (zones without any are left out). */
   zoneFindingCount: Record<string, number>;
   bodyPlanKey: string;
-  units: 'metric' | 'imperial';
+  units: WorkshopSettings['units'];
   paperSize: PaperSize;
 }
 

@@ -5,7 +5,7 @@
  * headliner before the upholstery below it). Follow-on steps (refitting skins, headliner,
  * upholstery) appear only when a step present needs them.
  */
-import type { BodyPlan, TradeName } from '../body-plans/schema';
+import { getZone, type BodyPlan, type TradeName } from '../body-plans';
 import type { WorkStep } from './types';
 
 export type WorkStepKey =
@@ -192,7 +192,7 @@ export function orderOfWork(items: readonly WorkItem[], plan: BodyPlan): WorkSte
     zones.set(key, list);
   };
   for (const item of items) {
-    const zone = plan.zones.find((z) => z.key === item.zoneKey);
+    const zone = getZone(plan, item.zoneKey);
     if (!zone) continue;
     if (item.needsTreatment) add('treat', zone.label);
     if (item.repair === false) continue;

@@ -12,17 +12,14 @@ export interface ZoneFindingInput {
   severity: number;
   activity: string;
   insectEvidence: readonly string[];
-  decayType: string;
 }
 
 export interface ZoneTreatmentInput {
-  id: string;
   appliedAt: string;
   zoneKeys: readonly string[];
 }
 
 export interface ZoneRecheckInput {
-  treatmentId: string;
   zoneKeys: readonly string[];
   dueDate: string;
   status: RecheckStatus;
@@ -86,6 +83,42 @@ function untreatedState(findings: ZoneFindingInput[]): ZoneStateResult {
   };
 }
 
+/** The zone's latest treatment (of equal times, the first listed), or null when untreated. */
+export function latestTreatment<T extends ZoneTreatmentInput>(
+  zoneKey: string,
+  treatments: readonly T[],
+): T | null {
+  return treatments
+    .filter((t) => t.zoneKeys.includes(zoneKey))
+    .reduce<T | null>((a, b) => (a && time(a.appliedAt) >= time(b.appliedAt) ? a : b), null);
+}
+
+/** The zone's re-checks completed with `status` after `appliedAt`, oldest first. */
+function rechecksSince<R extends ZoneRecheckInput>(
+  zoneKey: string,
+  rechecks: readonly R[],
+  appliedAt: string,
+  status: Exclude<RecheckStatus, 'pending'>,
+): R[] {
+  const since = time(appliedAt);
+  return rechecks
+    .filter(
+      (r) =>
+        r.zoneKeys.includes(zoneKey) &&
+        r.status === status &&
+        r.completedAt !== null &&
+        time(r.completedAt) > since,
+    )
+    .sort((a, b) => time(a.completedAt!) - time(b.completedAt!));
+}
+
+/** The clean re-checks of the zone completed after `appliedAt` (its latest treatment), oldest first. */
+export const cleanRechecksSince = <R extends ZoneRecheckInput>(
+  zoneKey: string,
+  rechecks: readonly R[],
+  appliedAt: string,
+) => rechecksSince(zoneKey, rechecks, appliedAt, 'clean');
+
 function zoneState(
   zoneKey: string,
   input: ZoneStatesInput,
@@ -93,29 +126,22 @@ function zoneState(
   timeZone: string,
 ): ZoneStateResult {
   const findings = input.findings.filter((f) => f.zoneKey === zoneKey);
-  const treatment = input.treatments
-    .filter((t) => t.zoneKeys.includes(zoneKey))
-    .reduce<ZoneTreatmentInput | null>(
-      (a, b) => (a && time(a.appliedAt) >= time(b.appliedAt) ? a : b),
-      null,
-    );
+  const treatment = latestTreatment(zoneKey, input.treatments);
   if (!treatment) return untreatedState(findings);
 
   const treatedAt = time(treatment.appliedAt);
   const treatedOn = localDate(treatment.appliedAt, timeZone, 'appliedAt');
-  const rechecks = input.rechecks.filter((r) => r.zoneKeys.includes(zoneKey));
-  const done = rechecks
-    .filter((r) => r.status !== 'pending' && r.completedAt && time(r.completedAt) > treatedAt)
-    .sort((a, b) => time(a.completedAt!) - time(b.completedAt!));
+  const cleanChecks = cleanRechecksSince(zoneKey, input.rechecks, treatment.appliedAt);
 
   // Any sign of life after the latest treatment reopens the zone until it is treated again.
   const fresh = [
     ...findings
       .filter((f) => freshAfterTreatment(f) && time(f.createdAt) > treatedAt)
       .map((f) => ({ at: f.createdAt, what: 'a finding' })),
-    ...done
-      .filter((r) => r.status === 'fresh-evidence')
-      .map((r) => ({ at: r.completedAt!, what: 'a re-check' })),
+    ...rechecksSince(zoneKey, input.rechecks, treatment.appliedAt, 'fresh-evidence').map((r) => ({
+      at: r.completedAt!,
+      what: 'a re-check',
+    })),
   ].sort((a, b) => time(a.at) - time(b.at));
   if (fresh.length > 0) {
     const first = fresh[0];
@@ -127,8 +153,9 @@ function zoneState(
   }
 
   const { cleanChecksRequired: needed, minSpanDays } = clearance;
-  const clean = done.length;
-  const lastCleanOn = clean > 0 ? localDate(done[clean - 1].completedAt!, timeZone) : treatedOn;
+  const clean = cleanChecks.length;
+  const lastCleanOn =
+    clean > 0 ? localDate(cleanChecks[clean - 1].completedAt!, timeZone) : treatedOn;
   const span = calendarDaysBetween(treatedOn, lastCleanOn);
   const rule = `${plural(needed, 'clean re-check')} over at least ${plural(minSpanDays, 'day')}`;
   if (clean >= needed && span >= minSpanDays) {
@@ -145,8 +172,8 @@ function zoneState(
     missing.push(
       `a clean re-check on or after ${spokenDate(addCalendarDays(treatedOn, minSpanDays))}`,
     );
-  const next = rechecks
-    .filter((r) => r.status === 'pending')
+  const next = input.rechecks
+    .filter((r) => r.zoneKeys.includes(zoneKey) && r.status === 'pending')
     .map((r) => r.dueDate)
     .sort()[0];
   return {
