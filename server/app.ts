@@ -37,6 +37,10 @@ export function depsOf(req: Request): AppDeps {
   return req.app.locals.deps as AppDeps;
 }
 
+/** Where links in e-mails point: PUBLIC_URL behind a proxy, else the request's own origin. */
+export const appUrlOf = (req: Request) =>
+  depsOf(req).config.publicUrl ?? `${req.protocol}://${req.get('host')}`;
+
 /** Builds the Express app (no listen): `/api` JSON routes, then the web export with an SPA fallback. */
 export function createApp(deps: AppDeps) {
   const { config } = deps;
@@ -47,7 +51,7 @@ export function createApp(deps: AppDeps) {
     createReportQueue({
       storage: deps.storage,
       concurrency: config.reports.concurrency,
-      verifyUrl: () => (config.publicUrl ? `${config.publicUrl.replace(/\/+$/, '')}/verify` : null),
+      verifyUrl: () => (config.publicUrl ? `${config.publicUrl}/verify` : null),
     });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);

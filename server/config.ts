@@ -92,7 +92,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     production,
     host: e.HOST,
     port: e.PORT,
-    publicUrl: e.PUBLIC_URL,
+    /** Without a trailing slash, so paths are appended as they are. */
+    publicUrl: e.PUBLIC_URL?.replace(/\/+$/, ''),
     db: {
       host: e.DB_HOST,
       port: e.DB_PORT,

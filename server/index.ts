@@ -22,7 +22,7 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
     from: config.mail.from,
   });
   // The address reports print for checking them: the public URL, else where this server listens.
-  let baseUrl = config.publicUrl?.replace(/\/+$/, '') ?? null;
+  let baseUrl = config.publicUrl ?? null;
   const reportQueue = createReportQueue({
     storage,
     concurrency: config.reports.concurrency,

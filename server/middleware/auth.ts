@@ -50,12 +50,16 @@ async function liveToken(config: Config, token: string): Promise<VerifiedToken |
   return verified;
 }
 
-/** The session token this request carries (Bearer first, then the cookie), unverified. */
-export function presentedToken(req: Request): string | null {
+/** The session token this request carries and how (Bearer first, then the cookie), unverified. */
+function carriedToken(req: Request): { token: string; via: AuthContext['via'] } | null {
   const header = req.get('authorization');
-  if (header?.startsWith('Bearer ')) return header.slice(7).trim();
-  return (req.cookies?.[SESSION_COOKIE] as string | undefined) ?? null;
+  if (header?.startsWith('Bearer ')) return { token: header.slice(7).trim(), via: 'bearer' };
+  const cookie = req.cookies?.[SESSION_COOKIE] as string | undefined;
+  return cookie == null ? null : { token: cookie, via: 'cookie' };
 }
+
+/** The session token this request carries (Bearer first, then the cookie), unverified. */
+export const presentedToken = (req: Request): string | null => carriedToken(req)?.token ?? null;
 
 /** Sets the session and CSRF cookies for the web client; returns the CSRF value. */
 export function setSessionCookies(res: Response, config: Config, token: string): string {
@@ -83,16 +87,15 @@ export function clearSessionCookies(res: Response, config: Config) {
  */
 export function authenticate(config: Config) {
   return async (req: Request, res: Response, next: NextFunction) => {
-    const header = req.get('authorization');
-    if (header?.startsWith('Bearer ')) {
-      const token = await liveToken(config, header.slice(7).trim());
+    const carried = carriedToken(req);
+    if (carried?.via === 'bearer') {
+      const token = await liveToken(config, carried.token);
       if (!token) return next(unauthenticated('Your session is not valid. Sign in again.'));
       res.locals.auth = { userId: token.userId, via: 'bearer' } satisfies AuthContext;
       return next();
     }
-    const cookie = req.cookies?.[SESSION_COOKIE] as string | undefined;
-    if (!cookie) return next();
-    const token = await liveToken(config, cookie);
+    if (!carried?.token) return next();
+    const token = await liveToken(config, carried.token);
     if (!token) {
       clearSessionCookies(res, config);
       return next();

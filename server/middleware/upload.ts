@@ -15,7 +15,7 @@ export const UPLOAD_LIMITS = {
 
 const megabytes = (bytes: number) => `${bytes / 1024 / 1024} MB`;
 
-function mapUploadError(err: unknown, fieldName: string): unknown {
+function mapPhotoUploadError(err: unknown, fieldName: string): unknown {
   if (!(err instanceof multer.MulterError)) {
     // busboy reports a cut-off or malformed body as a plain Error; anything else is not the client's fault.
     const message = err instanceof Error ? err.message : '';
@@ -63,35 +63,54 @@ function mapUploadError(err: unknown, fieldName: string): unknown {
   }
 }
 
+type MemoryUploadOptions = {
+  /** Every multer limit, none left at Infinity. */
+  limits: NonNullable<multer.Options['limits']>;
+  /** Which file field(s) multer accepts, e.g. `(m) => m.single('pdf')`. */
+  accept: (upload: multer.Multer) => RequestHandler;
+  /** The 415 message for a body that is not multipart. */
+  notMultipart: string;
+  /** Turns a parse error into the answer the client sees. */
+  mapError: (err: unknown) => unknown;
+  /** The error for a form that carried no file. */
+  noFile: () => AppError;
+};
+
 /**
- * Parses a multipart photo upload into memory (`req.files`, `req.body` for text fields). Only the
- * re-encoded renditions are ever stored, so nothing from the upload touches the disk.
+ * Parses a multipart upload into memory (`req.file` or `req.files`, `req.body` for text fields):
+ * what is kept is re-encoded or only hashed, so nothing from the upload touches the disk.
  */
-export function photoUpload(fieldName = 'photos'): RequestHandler {
-  const parse = multer({ storage: multer.memoryStorage(), limits: UPLOAD_LIMITS }).array(
-    fieldName,
-    UPLOAD_LIMITS.files,
-  );
+export function memoryUpload(opts: MemoryUploadOptions): RequestHandler {
+  const parse = opts.accept(multer({ storage: multer.memoryStorage(), limits: opts.limits }));
   return (req, res, next) => {
-    // multer silently skips bodies that are not multipart; a photo route must say why nothing arrived.
+    // multer silently skips bodies that are not multipart; an upload route must say why nothing arrived.
     if (!req.is('multipart/form-data')) {
-      next(new AppError(415, ERROR_CODES.unsupportedMedia, 'Send photos as multipart/form-data.'));
+      next(new AppError(415, ERROR_CODES.unsupportedMedia, opts.notMultipart));
       return;
     }
     parse(req, res, (err?: unknown) => {
       if (err) {
-        next(mapUploadError(err, fieldName));
+        next(opts.mapError(err));
         return;
       }
-      if (!Array.isArray(req.files) || req.files.length === 0) {
-        next(
-          new AppError(400, ERROR_CODES.validation, 'Choose at least one photo.', {
-            [fieldName]: 'Choose at least one photo.',
-          }),
-        );
+      if (!req.file && !(Array.isArray(req.files) && req.files.length > 0)) {
+        next(opts.noFile());
         return;
       }
       next();
     });
   };
 }
+
+/** Up to UPLOAD_LIMITS.files photos in `fieldName` (`req.files`). */
+export const photoUpload = (fieldName = 'photos'): RequestHandler =>
+  memoryUpload({
+    limits: UPLOAD_LIMITS,
+    accept: (upload) => upload.array(fieldName, UPLOAD_LIMITS.files),
+    notMultipart: 'Send photos as multipart/form-data.',
+    mapError: (err) => mapPhotoUploadError(err, fieldName),
+    noFile: () =>
+      new AppError(400, ERROR_CODES.validation, 'Choose at least one photo.', {
+        [fieldName]: 'Choose at least one photo.',
+      }),
+  });

@@ -2,6 +2,7 @@ import type { NextFunction, Request, Response } from 'express';
 import { can, type Action, type Role } from '@/shared/roles';
 import { forbidden, notFound } from '../errors';
 import { Membership } from '../models';
+import { isUuid } from '../services/vehicle-access';
 import { authOf } from './auth';
 
 export type MemberContext = {
@@ -18,9 +19,7 @@ export type MemberContext = {
 export async function loadMembership(req: Request, res: Response, next: NextFunction) {
   const { userId } = authOf(res);
   const workshopId = String(req.params.workshopId ?? '');
-  const m = /^[0-9a-f-]{36}$/i.test(workshopId)
-    ? await Membership.findOne({ where: { workshopId, userId } })
-    : null;
+  const m = isUuid(workshopId) ? await Membership.findOne({ where: { workshopId, userId } }) : null;
   if (!m) return next(notFound('Workshop'));
   res.locals.member = {
     membershipId: m.id,

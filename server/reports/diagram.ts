@@ -11,6 +11,7 @@ import {
   type BodyPlanView,
 } from '@/shared/body-plans';
 import { SEVERITY_LABELS } from '@/shared/schemas/finding';
+import { severityFill, severityInk, unloggedFill } from '@/shared/theme/colours';
 import {
   BOLD,
   INK,
@@ -24,16 +25,6 @@ import {
   type Doc,
 } from './layout';
 
-/** The app's severity scale (src/theme): fill and the ink that reads on it. */
-const FILL: Record<number, string> = {
-  0: '#CFE3C8',
-  1: '#F3E3A1',
-  2: '#F1BE7A',
-  3: '#DE7F57',
-  4: '#A8423A',
-};
-const ON_FILL: Record<number, string> = { 0: INK, 1: INK, 2: INK, 3: '#FFFFFF', 4: '#FFFFFF' };
-const UNLOGGED = '#EDE6DA';
 const HATCH: Record<number, 'single' | 'cross'> = { 3: 'single', 4: 'cross' };
 
 type Pt = [number, number];
@@ -91,7 +82,7 @@ export function viewSvg(
   for (const [zone, polygons] of byZone) {
     const sev = zoneSeverity[zone];
     const logged = typeof sev === 'number' && sev >= 1;
-    const fill = logged ? FILL[sev] : UNLOGGED;
+    const fill = logged ? severityFill[sev] : unloggedFill;
     for (const p of polygons)
       body.push(
         `<polygon points="${pts(p)}" fill="${fill}" stroke="${TIMBER_DARK}" stroke-width="${0.8 * unit}" stroke-linejoin="round"/>`,
@@ -101,7 +92,7 @@ export function viewSvg(
       defs.push(
         `<clipPath id="${id}">${polygons.map((p) => `<polygon points="${pts(p)}"/>`).join('')}</clipPath>`,
       );
-      body.push(hatchLines(id, view, HATCH[sev], unit, ON_FILL[sev] === INK ? INK : '#3A1410'));
+      body.push(hatchLines(id, view, HATCH[sev], unit, severityInk[sev] === INK ? INK : '#3A1410'));
     }
     if (watched.has(zone))
       for (const p of polygons)
@@ -113,8 +104,8 @@ export function viewSvg(
       const [cx, cy] = polygonCentroid(largest);
       const r = 6 * unit;
       marks.push(
-        `<circle cx="${cx}" cy="${cy}" r="${r}" fill="${FILL[sev]}" stroke="${INK}" stroke-width="${0.7 * unit}"/>`,
-        `<text x="${cx}" y="${cy + 3.2 * unit}" text-anchor="middle" font-family="Atkinson" font-weight="bold" font-size="${9 * unit}" fill="${ON_FILL[sev]}">${sev}</text>`,
+        `<circle cx="${cx}" cy="${cy}" r="${r}" fill="${severityFill[sev]}" stroke="${INK}" stroke-width="${0.7 * unit}"/>`,
+        `<text x="${cx}" y="${cy + 3.2 * unit}" text-anchor="middle" font-family="Atkinson" font-weight="bold" font-size="${9 * unit}" fill="${severityInk[sev]}">${sev}</text>`,
       );
     }
   }
@@ -152,7 +143,7 @@ function legendSvg(): { svg: string; width: number; height: number } {
         `<rect x="${x}" y="1" width="22" height="12" fill="none" stroke="${INK}" stroke-width="1.2" stroke-dasharray="3 2"/>`,
       );
     else {
-      const fill = e.sev === 'none' ? UNLOGGED : FILL[e.sev];
+      const fill = e.sev === 'none' ? unloggedFill : severityFill[e.sev];
       items.push(
         `<rect x="${x}" y="0" width="22" height="14" rx="2" fill="${fill}" stroke="${TIMBER_DARK}" stroke-width="0.6"/>`,
       );
@@ -172,7 +163,7 @@ function legendSvg(): { svg: string; width: number; height: number } {
       }
       if (typeof e.sev === 'number')
         items.push(
-          `<text x="${x + 11}" y="10.5" text-anchor="middle" font-family="Atkinson" font-weight="bold" font-size="9" fill="${ON_FILL[e.sev]}">${e.sev}</text>`,
+          `<text x="${x + 11}" y="10.5" text-anchor="middle" font-family="Atkinson" font-weight="bold" font-size="9" fill="${severityInk[e.sev]}">${e.sev}</text>`,
         );
     }
     items.push(text);

@@ -5,6 +5,7 @@
 import path from 'node:path';
 import PDFDocument from 'pdfkit';
 import type { PaperSize } from '@/shared/reports/types';
+import { colors } from '@/shared/theme/colours';
 
 export type Doc = PDFKit.PDFDocument;
 
@@ -16,12 +17,12 @@ export const FONT_FILES = {
 export const REGULAR = 'Atkinson-Regular';
 export const BOLD = 'Atkinson-Bold';
 
-/** The app's palette (src/theme), repeated here because server code does not import the client. */
-export const INK = '#1F2A30';
-export const MUTED = '#56646B';
-export const RULE = '#D6CCBC';
-export const TIMBER_DARK = '#7A5430';
-export const SUNKEN = '#EFE8DC';
+/** The app's palette, under the names the report code uses. */
+export const INK = colors.ink;
+export const MUTED = colors.inkMuted;
+export const RULE = colors.line;
+export const TIMBER_DARK = colors.timberDark;
+export const SUNKEN = colors.surfaceSunken;
 
 export const MARGIN = 54;
 /** Kept clear at the foot of every page for the footer line. */

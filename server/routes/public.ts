@@ -1,63 +1,33 @@
-import { Router, type RequestHandler } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { Router } from 'express';
 import multer from 'multer';
 import { ERROR_CODES } from '@/shared/schemas/common';
 import { shortIdParam } from '@/shared/schemas/report';
 import { depsOf } from '../app';
 import { AppError, badRequest } from '../errors';
+import { publicRateLimit } from '../middleware/rate-limit';
+import { memoryUpload } from '../middleware/upload';
 import { openShare, sharedPdf } from '../services/report-shares';
 import { verifyPdf, verifyShortId } from '../services/report-verify';
 import { sendPdf } from './reports';
 
 export const VERIFY_MAX_BYTES = 25 * 1024 * 1024;
 
-/** Per IP, `PUBLIC_RATE_LIMIT` requests in 15 minutes: links and identifiers cannot be guessed at speed. */
-function publicRateLimit(): RequestHandler {
-  return rateLimit({
-    windowMs: 15 * 60_000,
-    limit: (req) => depsOf(req).config.publicRateLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => ipKeyGenerator(req.ip ?? ''),
-    handler: (_req, _res, next) =>
-      next(
-        new AppError(
-          429,
-          ERROR_CODES.rateLimited,
-          'Too many requests from this address. Wait 15 minutes and try again.',
-        ),
-      ),
-  });
-}
-
-const chooseFile = () => badRequest({ pdf: 'Choose the PDF file to check.' });
-
 /** One PDF in the `pdf` field, into memory only: it is hashed and dropped. */
-function pdfUpload(): RequestHandler {
-  const parse = multer({
-    storage: multer.memoryStorage(),
+const pdfUpload = () =>
+  memoryUpload({
     limits: { fileSize: VERIFY_MAX_BYTES, files: 1, fields: 5, fieldSize: 1024, parts: 6 },
-  }).single('pdf');
-  return (req, res, next) => {
-    if (!req.is('multipart/form-data'))
-      return next(
-        new AppError(415, ERROR_CODES.unsupportedMedia, 'Send the PDF as multipart/form-data.'),
-      );
-    parse(req, res, (err?: unknown) => {
-      if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE')
-        return next(
-          new AppError(413, ERROR_CODES.tooLarge, 'A report PDF may be at most 25 MB.', {
-            pdf: 'At most 25 MB.',
-          }),
-        );
-      if (err instanceof multer.MulterError)
-        return next(badRequest({ pdf: 'Send one PDF file in the "pdf" field.' }));
-      if (err) return next(err);
-      if (!req.file) return next(chooseFile());
-      next();
-    });
-  };
-}
+    accept: (upload) => upload.single('pdf'),
+    notMultipart: 'Send the PDF as multipart/form-data.',
+    mapError: (err) => {
+      if (!(err instanceof multer.MulterError)) return err;
+      if (err.code === 'LIMIT_FILE_SIZE')
+        return new AppError(413, ERROR_CODES.tooLarge, 'A report PDF may be at most 25 MB.', {
+          pdf: 'At most 25 MB.',
+        });
+      return badRequest({ pdf: 'Send one PDF file in the "pdf" field.' });
+    },
+    noFile: () => badRequest({ pdf: 'Choose the PDF file to check.' }),
+  });
 
 /** The signed-out side of reports: share links and the verification page. No account, no cookies. */
 export function publicRoutes() {

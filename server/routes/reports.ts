@@ -1,6 +1,6 @@
-import { Router, type Request, type Response } from 'express';
+import { Router, type Response } from 'express';
 import { createReportRequest, createShareRequest } from '@/shared/schemas/report';
-import { depsOf } from '../app';
+import { appUrlOf, depsOf } from '../app';
 import { reportQueueOf } from '../jobs/report-queue';
 import { validate } from '../middleware/validate';
 import { memberOf, requireAction } from '../middleware/workshop';
@@ -15,10 +15,6 @@ export function sendPdf(res: Response, file: { pdf: Buffer; fileName: string }) 
     .setHeader('Cache-Control', 'private, no-store')
     .send(file.pdf);
 }
-
-/** Where links in e-mails point: PUBLIC_URL behind a proxy, else the request's own origin. */
-export const appUrlOf = (req: Request) =>
-  depsOf(req).config.publicUrl ?? `${req.protocol}://${req.get('host')}`;
 
 /** Generated reports (a job makes the PDF), their downloads and their share links. */
 export function reportRoutes() {

@@ -6,7 +6,7 @@ import {
   updateWorkshopRequest,
   type AuditListQuery,
 } from '@/shared/schemas/workshop';
-import { depsOf } from '../app';
+import { appUrlOf, depsOf } from '../app';
 import { validate, queryOf } from '../middleware/validate';
 import { memberOf, requireAction } from '../middleware/workshop';
 import { listAuditEntries } from '../services/audit';
@@ -68,10 +68,10 @@ export function workshopRoutes() {
     requireAction('members.manage'),
     validate({ body: createInvitationRequest }),
     async (req: Request, res: Response) => {
-      const { config, mailer } = depsOf(req);
-      // PUBLIC_URL should be set wherever the app sits behind a proxy; the request's own origin is the fallback.
-      const appUrl = config.publicUrl ?? `${req.protocol}://${req.get('host')}`;
-      res.status(201).json(await createInvitation(memberOf(res), req.body, { mailer, appUrl }));
+      const { mailer } = depsOf(req);
+      res
+        .status(201)
+        .json(await createInvitation(memberOf(res), req.body, { mailer, appUrl: appUrlOf(req) }));
     },
   );
 

@@ -22,10 +22,9 @@ import { Finding, Photo, Survey, User, type Vehicle } from '../models';
 import { audit, diff, snapshot } from './audit';
 import {
   describeVehicle,
+  findThroughVehicle,
   findVehicleFor,
-  isUuid,
   type FindVehicleOptions,
-  renameNotFound,
 } from './vehicle-access';
 import { findSurveyFor } from './surveys';
 import { idTaken } from './vehicles';
@@ -108,20 +107,13 @@ const seesDeleted = (member: MemberContext) => can(member.role, 'findings.write'
 export async function findFindingFor(
   member: MemberContext,
   findingId: string,
-  opts: FindVehicleOptions = {},
+  { includeDeleted, ...opts }: FindVehicleOptions = {},
 ): Promise<{ finding: Finding; vehicle: Vehicle }> {
-  if (!isUuid(findingId)) throw notFound('Finding');
-  const finding = await Finding.findOne({
-    where: { id: findingId, workshopId: member.workshopId },
-    paranoid: !(opts.includeDeleted && seesDeleted(member)),
-    transaction: opts.transaction,
-    lock: opts.lock && opts.transaction ? opts.transaction.LOCK.UPDATE : undefined,
+  const { row, vehicle } = await findThroughVehicle(Finding, 'Finding', member, findingId, {
+    ...opts,
+    paranoid: !(includeDeleted && seesDeleted(member)),
   });
-  if (!finding) throw notFound('Finding');
-  const vehicle = await findVehicleFor(member, finding.vehicleId, {
-    transaction: opts.transaction,
-  }).catch(renameNotFound('Finding'));
-  return { finding, vehicle };
+  return { finding: row, vehicle };
 }
 
 /** The zone must be on the vehicle's body plan, and a pin must sit inside one of its views. */

@@ -1,25 +1,21 @@
-import crypto from 'node:crypto';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { ROLE_LABELS } from '@/shared/roles';
 import { acceptInvitationRequest, type InvitationPreview } from '@/shared/schemas/auth';
 import { ERROR_CODES } from '@/shared/schemas/common';
 import type { CreateInvitationRequest, InvitationResponse } from '@/shared/schemas/workshop';
 import { AppError, notFound } from '../errors';
+import { escapeHtml, mailFailed } from '../mail/compose';
 import type { Mailer } from '../mail/transport';
 import type { MemberContext } from '../middleware/workshop';
 import { Invitation, Membership, User, Workshop } from '../models';
 import { audit } from './audit';
 import { emailTaken } from './auth';
 import { hashPassword } from './passwords';
+import { hashLinkToken, LINK_TOKEN_FORMAT, newLinkToken } from './tokens';
 
 export const INVITATION_TTL_DAYS = 7;
-const TOKEN_FORMAT = /^[A-Za-z0-9_-]{43}$/; // 32 random bytes, base64url
-
-/** Only this digest is stored; the token itself exists only in the e-mail. */
-export const hashInvitationToken = (token: string) =>
-  crypto.createHash('sha256').update(token, 'utf8').digest('hex');
-
-export const newInvitationToken = () => crypto.randomBytes(32).toString('base64url');
+// Under these names the test factories make invitation rows as this service does.
+export { hashLinkToken as hashInvitationToken, newLinkToken as newInvitationToken };
 
 const linkNotValid = () =>
   new AppError(
@@ -58,6 +54,7 @@ export async function listInvitations(workshopId: string): Promise<InvitationRes
 export async function createInvitation(
   member: MemberContext,
   body: CreateInvitationRequest,
+  /** `appUrl` without a trailing slash, as appUrlOf gives it. */
   opts: { mailer: Mailer; appUrl: string },
 ): Promise<InvitationResponse> {
   const sequelize = Invitation.sequelize!;
@@ -90,14 +87,14 @@ export async function createInvitation(
         transaction,
       },
     );
-    const token = newInvitationToken();
+    const token = newLinkToken();
     const invitation = await Invitation.create(
       {
         workshopId: workshop.id,
         invitedById: inviter.id,
         email: body.email,
         role: body.role,
-        tokenHash: hashInvitationToken(token),
+        tokenHash: hashLinkToken(token),
         expiresAt: new Date(Date.now() + INVITATION_TTL_DAYS * 24 * 3600_000),
       },
       { transaction },
@@ -112,7 +109,7 @@ export async function createInvitation(
       changes: { email: body.email, role: body.role },
     });
 
-    const link = `${opts.appUrl.replace(/\/+$/, '')}/invitation/${token}`;
+    const link = `${opts.appUrl}/invitation/${token}`;
     try {
       await opts.mailer.send(
         invitationMail({
@@ -124,9 +121,7 @@ export async function createInvitation(
         }),
       );
     } catch {
-      throw new AppError(
-        502,
-        ERROR_CODES.internal,
+      throw mailFailed(
         'The invitation e-mail could not be sent. Nothing was saved; try again in a moment.',
       );
     }
@@ -150,10 +145,9 @@ function invitationMail(p: {
     '',
     `The link works once and expires in ${INVITATION_TTL_DAYS} days. If you did not expect this invitation, ignore this e-mail.`,
   ].join('\n');
-  const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
   const html =
-    `<p>${esc(p.inviter)} has invited you to join <strong>${esc(p.workshop)}</strong> on Soundframe as ${esc(role)}.</p>` +
-    `<p><a href="${esc(p.link)}">Accept the invitation</a></p>` +
+    `<p>${escapeHtml(p.inviter)} has invited you to join <strong>${escapeHtml(p.workshop)}</strong> on Soundframe as ${escapeHtml(role)}.</p>` +
+    `<p><a href="${escapeHtml(p.link)}">Accept the invitation</a></p>` +
     `<p>The link works once and expires in ${INVITATION_TTL_DAYS} days. If you did not expect this invitation, ignore this e-mail.</p>`;
   return {
     to: p.to,
@@ -194,7 +188,7 @@ export async function revokeInvitation(member: MemberContext, invitationId: stri
 
 function usableWhere(token: string) {
   return {
-    tokenHash: hashInvitationToken(token),
+    tokenHash: hashLinkToken(token),
     acceptedAt: null,
     revokedAt: null,
     expiresAt: { [Op.gt]: new Date() },
@@ -202,7 +196,7 @@ function usableWhere(token: string) {
 }
 
 export async function previewInvitation(token: string): Promise<InvitationPreview> {
-  const inv = TOKEN_FORMAT.test(token)
+  const inv = LINK_TOKEN_FORMAT.test(token)
     ? await Invitation.findOne({
         where: usableWhere(token),
         include: [
@@ -233,7 +227,7 @@ export async function acceptInvitation(
 ): Promise<string> {
   const sequelize = Invitation.sequelize!;
   return sequelize.transaction(async (transaction: Transaction) => {
-    const inv = TOKEN_FORMAT.test(token)
+    const inv = LINK_TOKEN_FORMAT.test(token)
       ? await Invitation.findOne({
           where: usableWhere(token),
           lock: transaction.LOCK.UPDATE,

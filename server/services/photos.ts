@@ -8,7 +8,7 @@ import type { StorageAdapter } from '../storage';
 import { audit } from './audit';
 import { findFindingFor, toPhotoResponse } from './findings';
 import { processPhoto } from './photo-processing';
-import { describeVehicle, isUuid, renameNotFound } from './vehicle-access';
+import { describeVehicle, findInWorkshop, renameNotFound } from './vehicle-access';
 
 export const RENDITIONS = ['thumb', 'display'] as const;
 export type RenditionName = (typeof RENDITIONS)[number];
@@ -51,26 +51,21 @@ export async function addPhotos(
         transaction,
         lock: true,
       });
-      const rows = [];
-      for (const { id, p } of planned) {
-        rows.push(
-          await Photo.create(
-            {
-              id,
-              workshopId: member.workshopId,
-              findingId: finding.id,
-              uploadedById: member.userId,
-              width: p.width,
-              height: p.height,
-              thumbKey: photoKey(member.workshopId, id, 'thumb'),
-              displayKey: photoKey(member.workshopId, id, 'display'),
-              bytes: p.thumb.buffer.length + p.display.buffer.length,
-              caption,
-            },
-            { transaction },
-          ),
-        );
-      }
+      const rows = await Photo.bulkCreate(
+        planned.map(({ id, p }) => ({
+          id,
+          workshopId: member.workshopId,
+          findingId: finding.id,
+          uploadedById: member.userId,
+          width: p.width,
+          height: p.height,
+          thumbKey: photoKey(member.workshopId, id, 'thumb'),
+          displayKey: photoKey(member.workshopId, id, 'display'),
+          bytes: p.thumb.buffer.length + p.display.buffer.length,
+          caption,
+        })),
+        { transaction },
+      );
       await audit(transaction, {
         workshopId: member.workshopId,
         actorId: member.userId,
@@ -94,12 +89,7 @@ async function findPhotoFor(
   photoId: string,
   opts: { transaction?: Transaction } = {},
 ) {
-  if (!isUuid(photoId)) throw notFound('Photo');
-  const photo = await Photo.findOne({
-    where: { id: photoId, workshopId: member.workshopId },
-    transaction: opts.transaction,
-  });
-  if (!photo) throw notFound('Photo');
+  const photo = await findInWorkshop(Photo, 'Photo', member, photoId, opts);
   const { finding, vehicle } = await findFindingFor(member, photo.findingId, {
     includeDeleted: true,
     transaction: opts.transaction,

@@ -1,7 +1,7 @@
 import { createEvent } from 'ics';
 import type { Transaction, WhereOptions } from 'sequelize';
 import type { z } from 'zod';
-import { getBodyPlan, getZone } from '@/shared/body-plans';
+import { getBodyPlan, zoneLabel } from '@/shared/body-plans';
 import { can } from '@/shared/roles';
 import { addCalendarDays, localDate } from '@/shared/treatments';
 import type {
@@ -12,19 +12,18 @@ import type {
   RecheckResponse,
   recordRecheckRequest,
 } from '@/shared/schemas/recheck';
-import { AppError, badRequest, notFound, staleVersion } from '../errors';
+import { badRequest, conflict, notFound, staleVersion } from '../errors';
 import type { MemberContext } from '../middleware/workshop';
-import { Finding, Membership, ReCheck, Survey, User, Vehicle, Workshop } from '../models';
+import { Finding, Membership, ReCheck, Survey, User, Vehicle } from '../models';
 import { audit } from './audit';
 import {
   describeVehicle,
+  findThroughVehicle,
   findVehicleFor,
-  isUuid,
-  renameNotFound,
   visibleVehiclesWhere,
-  type FindVehicleOptions,
+  type FindRowOptions,
 } from './vehicle-access';
-import { readSettings } from './workshops';
+import { settingsOf } from './workshops';
 
 type RecordRecheck = z.output<typeof recordRecheckRequest>;
 type MoveRecheck = z.output<typeof moveRecheckRequest>;
@@ -63,22 +62,9 @@ async function withDetails(id: string, vehicle: Vehicle, transaction?: Transacti
 }
 
 /** A re-check and its vehicle, through the vehicle gate (404 for another workshop or an unshared client). */
-export async function findRecheckFor(
-  member: MemberContext,
-  recheckId: string,
-  opts: FindVehicleOptions = {},
-) {
-  if (!isUuid(recheckId)) throw notFound('Re-check');
-  const recheck = await ReCheck.findOne({
-    where: { id: recheckId, workshopId: member.workshopId },
-    transaction: opts.transaction,
-    lock: opts.lock && opts.transaction ? opts.transaction.LOCK.UPDATE : undefined,
-  });
-  if (!recheck) throw notFound('Re-check');
-  const vehicle = await findVehicleFor(member, recheck.vehicleId, {
-    transaction: opts.transaction,
-  }).catch(renameNotFound('Re-check'));
-  return { recheck, vehicle };
+async function findRecheckFor(member: MemberContext, recheckId: string, opts: FindRowOptions = {}) {
+  const { row, vehicle } = await findThroughVehicle(ReCheck, 'Re-check', member, recheckId, opts);
+  return { recheck: row, vehicle };
 }
 
 export async function listVehicleRechecks(member: MemberContext, vehicleId: string) {
@@ -103,9 +89,7 @@ export async function dueList(
   member: MemberContext,
   query: DueListQuery,
 ): Promise<DueListResponse> {
-  const workshop = await Workshop.findByPk(member.workshopId);
-  if (!workshop) throw notFound('Workshop');
-  const today = localDate(new Date(), readSettings(workshop.settings).treatments.timeZone);
+  const today = localDate(new Date(), (await settingsOf(member.workshopId)).treatments.timeZone);
   const windowEnd = addCalendarDays(today, query.days);
   const where: WhereOptions<ReCheck> = { workshopId: member.workshopId, status: 'pending' };
   if (query.assigneeId) Object.assign(where, { assigneeId: query.assigneeId });
@@ -131,12 +115,11 @@ export async function dueList(
   return out;
 }
 
-const alreadyDone = () =>
-  new AppError(409, 'conflict', 'This re-check already has a result; it cannot change.');
+const alreadyDone = () => conflict('This re-check already has a result; it cannot change.');
 
 function zoneLabels(vehicle: Vehicle, zoneKeys: string[]) {
   const plan = getBodyPlan(vehicle.bodyPlanKey);
-  return zoneKeys.map((k) => (plan && getZone(plan, k)?.label) || k);
+  return zoneKeys.map((k) => zoneLabel(plan, k));
 }
 
 /** The vehicle's most recent survey: where fresh evidence from a re-check is logged. */

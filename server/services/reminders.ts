@@ -1,10 +1,11 @@
 import crypto from 'node:crypto';
-import { TZDate } from '@date-fns/tz';
-import { addDays, addMinutes, format, parseISO } from 'date-fns';
+import { addMinutes, format, parseISO } from 'date-fns';
 import { QueryTypes, Transaction, type Sequelize } from 'sequelize';
-import { getBodyPlan, getZone } from '@/shared/body-plans';
+import { getBodyPlan, zoneLabel } from '@/shared/body-plans';
+import { addCalendarDays, localDate } from '@/shared/treatments';
 import type { Mailer } from '../mail/transport';
 import { ReminderDelivery } from '../models';
+import { describeVehicle } from './vehicle-access';
 
 /**
  * E-mail digests of the re-checks each assignee has due (today or tomorrow) or overdue, one per
@@ -54,11 +55,10 @@ export function retryDelayMinutes(attempts: number): number {
   return RETRY_BACKOFF_MINUTES[Math.min(Math.max(attempts, 1), RETRY_BACKOFF_MINUTES.length) - 1];
 }
 
-/** The calendar date at `now` in `timeZone` ('YYYY-MM-DD'); an unknown zone reads as UTC. */
-export function localDate(now: Date, timeZone: string | null | undefined): string {
-  return format(new TZDate(now, validTimeZone(timeZone)), 'yyyy-MM-dd');
-}
+/** The digest date is the shared calendar date; re-exported so tests compute it the same way. */
+export { localDate };
 
+/** A workshop's saved time zone, or UTC when it is missing or unknown. */
 function validTimeZone(timeZone: string | null | undefined): string {
   if (!timeZone) return 'UTC';
   try {
@@ -68,8 +68,6 @@ function validTimeZone(timeZone: string | null | undefined): string {
     return 'UTC';
   }
 }
-
-const plusDays = (day: string, n: number) => format(addDays(parseISO(day), n), 'yyyy-MM-dd');
 
 function isDeadlock(e: unknown): boolean {
   const parent = (e as { parent?: { errno?: number; code?: string } }).parent;
@@ -122,7 +120,7 @@ export async function runReminderCycle(opts: ReminderCycleOptions): Promise<Remi
 /** Step 1: one pending row per assignee and workshop with re-checks due by tomorrow (their workshop's date). */
 async function enqueueDigests(sequelize: Sequelize, now: Date): Promise<number> {
   // Tomorrow anywhere on earth is at most two UTC days ahead: a cheap first cut before per-zone dates.
-  const widest = plusDays(localDate(now, 'UTC'), 2);
+  const widest = addCalendarDays(localDate(now, 'UTC'), 2);
   const workshops = await sequelize.query<{ workshop_id: string; time_zone: string | null }>(
     `SELECT r.workshop_id,
             JSON_UNQUOTE(JSON_EXTRACT(w.settings, '$.treatments.timeZone')) AS time_zone
@@ -133,7 +131,7 @@ async function enqueueDigests(sequelize: Sequelize, now: Date): Promise<number> 
   );
   let inserted = 0;
   for (const w of workshops) {
-    const today = localDate(now, w.time_zone);
+    const today = localDate(now, validTimeZone(w.time_zone));
     const due = await sequelize.query<{ assignee_id: string; id: string }>(
       `SELECT r.assignee_id, r.id
          FROM re_checks r
@@ -144,7 +142,7 @@ async function enqueueDigests(sequelize: Sequelize, now: Date): Promise<number> 
         ORDER BY r.assignee_id, r.due_date, r.id`,
       {
         type: QueryTypes.SELECT,
-        replacements: { workshopId: w.workshop_id, horizon: plusDays(today, 1) },
+        replacements: { workshopId: w.workshop_id, horizon: addCalendarDays(today, 1) },
       },
     );
     const byAssignee = new Map<string, string[]>();
@@ -308,7 +306,7 @@ async function deliver(
         ).map((r): DigestItem => ({
           id: r.id,
           dueDate: r.due_date,
-          vehicle: `${r.year} ${r.make} ${r.model}`,
+          vehicle: describeVehicle(r),
           zones: zoneLabels(r.body_plan_key, parseJsonArray(r.zone_keys)),
         }));
   if (items.length === 0) return drop();
@@ -352,7 +350,7 @@ async function deliver(
 
 function zoneLabels(bodyPlanKey: string, keys: string[]): string[] {
   const plan = getBodyPlan(bodyPlanKey);
-  return keys.map((k) => (plan && getZone(plan, k)?.label) || k);
+  return keys.map((k) => zoneLabel(plan, k));
 }
 
 const longDate = (day: string) => format(parseISO(day), 'EEE d MMM yyyy');

@@ -1,4 +1,3 @@
-import crypto from 'node:crypto';
 import { literal, Op, type Transaction } from 'sequelize';
 import { ERROR_CODES } from '@/shared/schemas/common';
 import {
@@ -10,22 +9,19 @@ import {
 } from '@/shared/schemas/report';
 import type { z } from 'zod';
 import { AppError, notFound } from '../errors';
+import { escapeHtml, mailFailed } from '../mail/compose';
 import type { Mailer } from '../mail/transport';
 import type { MemberContext } from '../middleware/workshop';
 import { Report, ReportShare, User, Vehicle, Workshop } from '../models';
 import type { StorageAdapter } from '../storage';
 import { audit } from './audit';
 import { findReportFor, latestReadyVersion, readReportPdf } from './reports';
+import { hashLinkToken, LINK_TOKEN_FORMAT, newLinkToken } from './tokens';
 import { isUuid } from './vehicle-access';
 
 type CreateShare = z.output<typeof createShareRequest>;
 
-const TOKEN_FORMAT = /^[A-Za-z0-9_-]{43}$/; // 32 random bytes, base64url
 const DAY_MS = 24 * 3600_000;
-
-/** Only this digest is stored; the token itself exists in the creator's answer and the e-mail. */
-export const hashShareToken = (token: string) =>
-  crypto.createHash('sha256').update(token, 'utf8').digest('hex');
 
 /** The one answer for every link that does not work, whatever the reason, so nothing is told apart. */
 export const linkNotAvailable = () =>
@@ -76,6 +72,7 @@ export async function createShare(
   member: MemberContext,
   reportId: string,
   body: CreateShare,
+  /** `appUrl` without a trailing slash, as appUrlOf gives it. */
   opts: { mailer: Mailer; appUrl: string },
 ): Promise<CreateShareResponse> {
   return ReportShare.sequelize!.transaction(async (transaction: Transaction) => {
@@ -86,12 +83,12 @@ export async function createShare(
         ERROR_CODES.conflict,
         'Only a report that is ready can be shared. Wait until it is generated.',
       );
-    const token = crypto.randomBytes(32).toString('base64url');
+    const token = newLinkToken();
     const share = await ReportShare.create(
       {
         workshopId: member.workshopId,
         reportId: report.id,
-        tokenHash: hashShareToken(token),
+        tokenHash: hashLinkToken(token),
         recipientEmail: body.recipientEmail,
         message: body.message,
         expiresAt: new Date(Date.now() + body.expiresInDays * DAY_MS),
@@ -115,7 +112,7 @@ export async function createShare(
       },
     });
 
-    const url = `${opts.appUrl.replace(/\/+$/, '')}/shared/${token}`;
+    const url = `${opts.appUrl}/shared/${token}`;
     if (body.recipientEmail) {
       const [workshop, sender] = await Promise.all([
         Workshop.findByPk(member.workshopId, { attributes: ['name'], transaction }),
@@ -135,11 +132,7 @@ export async function createShare(
           }),
         );
       } catch {
-        throw new AppError(
-          502,
-          ERROR_CODES.internal,
-          'The e-mail could not be sent. No link was made; try again in a moment.',
-        );
+        throw mailFailed('The e-mail could not be sent. No link was made; try again in a moment.');
       }
       share.emailedAt = new Date();
       await share.save({ transaction });
@@ -159,7 +152,6 @@ function shareMail(p: {
   expiry: string;
   message: string;
 }) {
-  const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
   const intro = `${p.sender} of ${p.workshop} has shared a report with you on Soundframe: the ${p.what} (${p.shortId}).`;
   const expiry = `The link works until ${p.expiry}; no account is needed. You can check that the PDF is unchanged on the verification page.`;
   const text = [
@@ -172,10 +164,10 @@ function shareMail(p: {
     expiry,
   ].join('\n');
   const html =
-    `<p>${esc(intro)}</p>` +
-    (p.message ? `<blockquote>${esc(p.message).replace(/\n/g, '<br>')}</blockquote>` : '') +
-    `<p><a href="${esc(p.url)}">Open the report</a></p>` +
-    `<p>${esc(expiry)}</p>`;
+    `<p>${escapeHtml(intro)}</p>` +
+    (p.message ? `<blockquote>${escapeHtml(p.message).replace(/\n/g, '<br>')}</blockquote>` : '') +
+    `<p><a href="${escapeHtml(p.url)}">Open the report</a></p>` +
+    `<p>${escapeHtml(expiry)}</p>`;
   return { to: p.to, subject: `${p.workshop} shared a report with you`, text, html };
 }
 
@@ -214,10 +206,10 @@ export async function revokeShare(member: MemberContext, shareId: string) {
 
 /** A working link's share and ready report, or the one 404; looked up by the token's hash only. */
 async function usableShare(token: string) {
-  if (!TOKEN_FORMAT.test(token)) throw linkNotAvailable();
+  if (!LINK_TOKEN_FORMAT.test(token)) throw linkNotAvailable();
   const share = await ReportShare.findOne({
     where: {
-      tokenHash: hashShareToken(token),
+      tokenHash: hashLinkToken(token),
       revokedAt: null,
       expiresAt: { [Op.gt]: new Date() },
     },

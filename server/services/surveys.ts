@@ -12,10 +12,9 @@ import { Survey, User, type Vehicle } from '../models';
 import { audit, diff, snapshot } from './audit';
 import {
   describeVehicle,
+  findThroughVehicle,
   findVehicleFor,
-  isUuid,
-  type FindVehicleOptions,
-  renameNotFound,
+  type FindRowOptions,
 } from './vehicle-access';
 import { idTaken } from './vehicles';
 
@@ -61,19 +60,10 @@ export function toSurveyResponse(s: Survey): SurveyResponse {
 export async function findSurveyFor(
   member: MemberContext,
   surveyId: string,
-  opts: FindVehicleOptions = {},
+  opts: FindRowOptions = {},
 ) {
-  if (!isUuid(surveyId)) throw notFound('Survey');
-  const survey = await Survey.findOne({
-    where: { id: surveyId, workshopId: member.workshopId },
-    transaction: opts.transaction,
-    lock: opts.lock && opts.transaction ? opts.transaction.LOCK.UPDATE : undefined,
-  });
-  if (!survey) throw notFound('Survey');
-  const vehicle = await findVehicleFor(member, survey.vehicleId, {
-    transaction: opts.transaction,
-  }).catch(renameNotFound('Survey'));
-  return { survey, vehicle };
+  const { row, vehicle } = await findThroughVehicle(Survey, 'Survey', member, surveyId, opts);
+  return { survey: row, vehicle };
 }
 
 /** Areas marked not accessible must be zones of the vehicle's body plan; free text goes in the notes. */

@@ -1,4 +1,4 @@
-import { getBodyPlan, getZone } from '@/shared/body-plans';
+import { getBodyPlan, zoneLabel } from '@/shared/body-plans';
 import { INSECT_EVIDENCE_LABELS, SEVERITY_LABELS } from '@/shared/schemas/finding';
 import {
   RECHECK_STATUS_LABELS,
@@ -8,7 +8,7 @@ import {
 } from '@/shared/schemas/recheck';
 import { TREATMENT_METHOD_LABELS } from '@/shared/schemas/treatment';
 import type { MemberContext } from '../middleware/workshop';
-import { Finding, ReCheck, Survey, Treatment, type Vehicle } from '../models';
+import { Finding, ReCheck, Survey, Treatment } from '../models';
 import { findVehicleFor } from './vehicle-access';
 
 /** Newest first; at the same moment a later step of the work comes first. */
@@ -16,11 +16,6 @@ const RANK: Record<TimelineKind, number> = { recheck: 0, treatment: 1, finding: 
 
 /** A calendar date as the start of that day, for sorting against timestamps. */
 const dayStart = (date: string) => `${date}T00:00:00.000Z`;
-
-function labeller(vehicle: Vehicle) {
-  const plan = getBodyPlan(vehicle.bodyPlanKey);
-  return (key: string) => (plan && getZone(plan, key)?.label) || key;
-}
 
 /**
  * Surveys, findings, treatments and re-checks of one vehicle in one list, newest first.
@@ -32,7 +27,8 @@ export async function getTimeline(
   kinds: TimelineKind[],
 ): Promise<TimelineItem[]> {
   const vehicle = await findVehicleFor(member, vehicleId);
-  const zone = labeller(vehicle);
+  const plan = getBodyPlan(vehicle.bodyPlanKey);
+  const zone = (key: string) => zoneLabel(plan, key);
   const wanted = new Set(kinds);
   const where = { vehicleId: vehicle.id };
   const items: TimelineItem[] = [];

@@ -1,4 +1,4 @@
-import { UniqueConstraintError, type Transaction } from 'sequelize';
+import { literal, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { getBodyPlan } from '@/shared/body-plans';
 import type {
@@ -10,17 +10,16 @@ import type {
 import { recheckDueDates } from '@/shared/treatments';
 import { badRequest, notFound, staleVersion } from '../errors';
 import type { MemberContext } from '../middleware/workshop';
-import { ReCheck, Treatment, TreatmentVersion, User, Workshop, type Vehicle } from '../models';
+import { ReCheck, Treatment, TreatmentVersion, User, type Vehicle } from '../models';
 import { audit, diff } from './audit';
 import {
   describeVehicle,
+  findThroughVehicle,
   findVehicleFor,
-  isUuid,
-  renameNotFound,
-  type FindVehicleOptions,
+  type FindRowOptions,
 } from './vehicle-access';
 import { idTaken } from './vehicles';
-import { readSettings } from './workshops';
+import { settingsOf } from './workshops';
 
 type CreateTreatment = z.output<typeof createTreatmentRequest>;
 type CorrectTreatment = z.output<typeof correctTreatmentRequest>;
@@ -81,29 +80,20 @@ async function withDetails(id: string, transaction?: Transaction) {
   return toTreatmentResponse(row);
 }
 
-async function treatmentSettings(workshopId: string, transaction: Transaction) {
-  const workshop = await Workshop.findByPk(workshopId, { transaction });
-  if (!workshop) throw notFound('Workshop');
-  return readSettings(workshop.settings).treatments;
-}
-
 /** A treatment and its vehicle, through the vehicle gate (404 for another workshop or an unshared client). */
-export async function findTreatmentFor(
+async function findTreatmentFor(
   member: MemberContext,
   treatmentId: string,
-  opts: FindVehicleOptions = {},
+  opts: FindRowOptions = {},
 ) {
-  if (!isUuid(treatmentId)) throw notFound('Treatment');
-  const treatment = await Treatment.findOne({
-    where: { id: treatmentId, workshopId: member.workshopId },
-    transaction: opts.transaction,
-    lock: opts.lock && opts.transaction ? opts.transaction.LOCK.UPDATE : undefined,
-  });
-  if (!treatment) throw notFound('Treatment');
-  const vehicle = await findVehicleFor(member, treatment.vehicleId, {
-    transaction: opts.transaction,
-  }).catch(renameNotFound('Treatment'));
-  return { treatment, vehicle };
+  const { row, vehicle } = await findThroughVehicle(
+    Treatment,
+    'Treatment',
+    member,
+    treatmentId,
+    opts,
+  );
+  return { treatment: row, vehicle };
 }
 
 export async function listTreatments(member: MemberContext, vehicleId: string) {
@@ -143,7 +133,7 @@ export async function createTreatment(
     const id = await Treatment.sequelize!.transaction(async (transaction) => {
       const vehicle = await findVehicleFor(member, vehicleId, { transaction, lock: true });
       const data = dataOf(body, checkZones(vehicle, body.zoneKeys));
-      const settings = await treatmentSettings(member.workshopId, transaction);
+      const settings = (await settingsOf(member.workshopId, transaction)).treatments;
       const dueDates = recheckDueDates(data.appliedAt, data.targetAgent, data.method, settings);
       const treatment = await Treatment.create(
         {
@@ -253,10 +243,10 @@ export async function correctTreatment(
     });
     const pending = rechecks.filter((r) => r.status === 'pending');
     if (replanned) {
-      const settings = await treatmentSettings(member.workshopId, transaction);
+      const settings = (await settingsOf(member.workshopId, transaction)).treatments;
       const dates = recheckDueDates(after.appliedAt, after.targetAgent, after.method, settings);
       const assigneeId = pending[0]?.assigneeId ?? null;
-      for (const r of pending) await r.destroy({ transaction });
+      await ReCheck.destroy({ where: { id: pending.map((r) => r.id) }, transaction });
       await ReCheck.bulkCreate(
         dates.slice(rechecks.length - pending.length).map((dueDate) => ({
           workshopId: member.workshopId,
@@ -269,7 +259,11 @@ export async function correctTreatment(
         { transaction },
       );
     } else if ('zoneKeys' in changed) {
-      for (const r of pending) await r.update({ zoneKeys: after.zoneKeys }, { transaction });
+      // A static update skips the model's optimistic-lock bump, so it is made here as save() would.
+      await ReCheck.update(
+        { zoneKeys: after.zoneKeys, version: literal('version + 1') },
+        { where: { id: pending.map((r) => r.id) }, transaction },
+      );
     }
 
     await audit(transaction, {

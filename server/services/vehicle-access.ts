@@ -1,4 +1,11 @@
-import { literal, Op, type Transaction, type WhereOptions } from 'sequelize';
+import {
+  literal,
+  Op,
+  type Model,
+  type ModelStatic,
+  type Transaction,
+  type WhereOptions,
+} from 'sequelize';
 import type { VehicleAccessResponse } from '@/shared/schemas/vehicle';
 import { AppError, badRequest, notFound } from '../errors';
 import type { MemberContext } from '../middleware/workshop';
@@ -46,6 +53,48 @@ export async function findVehicleFor(
 export const renameNotFound = (what: string) => (err: unknown) => {
   throw err instanceof AppError && err.status === 404 ? notFound(what) : err;
 };
+
+export type FindRowOptions = {
+  transaction?: Transaction;
+  /** Take a row lock on the record (not its vehicle) so a concurrent writer waits. */
+  lock?: boolean;
+  /** False to also find a soft-deleted record. */
+  paranoid?: boolean;
+};
+
+/** A record of the member's workshop by id; a malformed id or another workshop's record is 404 `label`. */
+export async function findInWorkshop<M extends Model>(
+  model: ModelStatic<M>,
+  label: string,
+  member: MemberContext,
+  id: string,
+  opts: FindRowOptions = {},
+): Promise<M> {
+  if (!isUuid(id)) throw notFound(label);
+  const row = await model.findOne({
+    where: { id, workshopId: member.workshopId } as WhereOptions,
+    paranoid: opts.paranoid,
+    transaction: opts.transaction,
+    lock: opts.lock && opts.transaction ? opts.transaction.LOCK.UPDATE : undefined,
+  });
+  if (!row) throw notFound(label);
+  return row;
+}
+
+/** A record hanging off a vehicle, and that vehicle through the gate (a hidden vehicle is 404 `label`). */
+export async function findThroughVehicle<M extends Model & { vehicleId: string }>(
+  model: ModelStatic<M>,
+  label: string,
+  member: MemberContext,
+  id: string,
+  opts: FindRowOptions = {},
+): Promise<{ row: M; vehicle: Vehicle }> {
+  const row = await findInWorkshop(model, label, member, id, opts);
+  const vehicle = await findVehicleFor(member, row.vehicleId, {
+    transaction: opts.transaction,
+  }).catch(renameNotFound(label));
+  return { row, vehicle };
+}
 
 async function hasAccess(vehicleId: string, userId: string, transaction?: Transaction) {
   return (await VehicleAccess.count({ where: { vehicleId, userId }, transaction })) > 0;

@@ -1,8 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { z } from 'zod';
 import {
-  mergeTreatmentSettings,
-  mergeWoodSettings,
+  mergeSettings,
   workshopSettings,
   type updateWorkshopRequest,
   type WorkshopResponse,
@@ -26,8 +25,8 @@ export function readSettings(stored: Partial<WorkshopSettings> | null | undefine
   const saved = stored ?? {};
   return workshopSettings.parse({
     ...saved,
-    wood: mergeWoodSettings(DEFAULT_WOOD_SETTINGS, saved.wood),
-    treatments: mergeTreatmentSettings(DEFAULT_TREATMENT_SETTINGS, saved.treatments),
+    wood: mergeSettings(DEFAULT_WOOD_SETTINGS, saved.wood),
+    treatments: mergeSettings(DEFAULT_TREATMENT_SETTINGS, saved.treatments),
   });
 }
 
@@ -79,8 +78,8 @@ export async function updateWorkshop(
     const parsed = workshopSettings.safeParse({
       ...current,
       ...flat,
-      wood: mergeWoodSettings(current.wood, woodPatch),
-      treatments: mergeTreatmentSettings(current.treatments, treatmentsPatch),
+      wood: mergeSettings(current.wood, woodPatch),
+      treatments: mergeSettings(current.treatments, treatmentsPatch),
     });
     if (!parsed.success)
       throw badRequest(

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { METER_TEMP_RANGE_C } from '../wood/moisture';
 import { isoDateTime, uuid, withoutDefaults } from './common';
 
 export const SEVERITIES = [0, 1, 2, 3, 4] as const;
@@ -58,7 +59,12 @@ const mm = z.number().min(0).max(2000);
 
 export const moistureReading = z.object({
   meterReading: z.number().min(0).max(100),
-  woodTempC: z.number().min(-30).max(70).nullable().default(null),
+  woodTempC: z
+    .number()
+    .min(METER_TEMP_RANGE_C.min)
+    .max(METER_TEMP_RANGE_C.max)
+    .nullable()
+    .default(null),
   species: z.string().max(60).nullable().default(null),
 });
 
@@ -75,7 +81,8 @@ export const pinPosition = z.object({
   y: z.number(),
 });
 
-const findingFields = {
+/** The fields a finding is written with; a re-check's fresh evidence reuses some. */
+export const findingFields = {
   zoneKey: z.string().min(1, 'Choose a zone').max(60),
   severity: z.number().int().min(0).max(4),
   decayType: z.enum(DECAY_TYPES).default('none'),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ACTIVITY, INSECT_EVIDENCE } from './finding';
+import { ACTIVITY, findingFields } from './finding';
 import { isoDate, isoDateTime, uuid } from './common';
 
 export const RECHECK_STATUSES = ['pending', 'clean', 'fresh-evidence'] as const;
@@ -37,11 +37,12 @@ const version = z.number().int().min(0);
 
 /** The finding a re-check with fresh evidence creates (in the vehicle's latest survey). */
 export const recheckFinding = z.object({
-  zoneKey: z.string().min(1, 'Choose a zone').max(60),
-  severity: z.number().int().min(0).max(4),
-  insectEvidence: z.array(z.enum(INSECT_EVIDENCE)).max(INSECT_EVIDENCE.length).default([]),
+  zoneKey: findingFields.zoneKey,
+  severity: findingFields.severity,
+  insectEvidence: findingFields.insectEvidence,
+  /** Fresh evidence means live attack unless the inspector says otherwise. */
   activity: z.enum(ACTIVITY).default('active'),
-  notes: z.string().trim().max(4000).default(''),
+  notes: findingFields.notes,
 });
 
 /** POST /api/workshops/:wid/rechecks/:rid/result */

@@ -6,14 +6,8 @@ import {
   PLAN_GROUPS,
   treatmentSettingsSchema,
   type PlanGroup,
-  type TreatmentSettings,
 } from '../treatments/settings';
-import {
-  DEFAULT_WOOD_SETTINGS,
-  verdictRulesSchema,
-  woodSettingsSchema,
-  type WoodSettings,
-} from '../wood/settings';
+import { DEFAULT_WOOD_SETTINGS, verdictRulesSchema, woodSettingsSchema } from '../wood/settings';
 import { emailSchema } from './auth';
 import { isoDateTime, uuid } from './common';
 import { PAPER_SIZES } from './report';
@@ -89,18 +83,11 @@ function deepMerge(base: unknown, patch: unknown): unknown {
 }
 
 /**
- * Wood settings with `patch` laid over `base` key by key (not validated: parse the result with
- * woodSettingsSchema). Also fills a saved value from before a key existed with its default.
+ * Settings (wood or treatments) with `patch` laid over `base` key by key (not validated: parse
+ * the result with the section's schema). Also fills a saved value from before a key existed
+ * with its default.
  */
-export function mergeWoodSettings(base: WoodSettings, patch: unknown): unknown {
-  return deepMerge(base, patch);
-}
-
-/**
- * Treatment settings with `patch` laid over `base` key by key (not validated: parse the result
- * with treatmentSettingsSchema). Fills a saved value from before a key existed with its default.
- */
-export function mergeTreatmentSettings(base: TreatmentSettings, patch: unknown): unknown {
+export function mergeSettings(base: object, patch: unknown): unknown {
   return deepMerge(base, patch);
 }
 

@@ -3,6 +3,7 @@
  * confirmation by a professional. Each rule cites its source (SOURCES.md, "Insects" and
  * "Decay and strength"); the weights are our own, for ranking only.
  */
+import { DECAY_TYPES } from '../schemas/finding';
 import { DomainError, requireNonNegative } from './errors';
 import {
   DECAY_THRESHOLD_PERCENT,
@@ -351,8 +352,6 @@ const FRASS_BY_EVIDENCE: Record<string, Frass> = {
   'frass-fibrous': 'fibrous',
 };
 
-const DECAY_TYPES: readonly string[] = ['none', 'brown-rot', 'white-rot', 'soft-rot', 'unknown'];
-
 /** A finding's recorded evidence as AgentEvidence; Douglas-fir is the one softwood species. */
 export function evidenceFromFinding(f: {
   insectEvidence: string[];
@@ -361,7 +360,7 @@ export function evidenceFromFinding(f: {
   moisturePercent?: number | null;
   species?: string | null;
 }): AgentEvidence {
-  if (!DECAY_TYPES.includes(f.decayType)) {
+  if (!(DECAY_TYPES as readonly string[]).includes(f.decayType)) {
     throw new DomainError('decayType', `Unknown decay type "${f.decayType}".`);
   }
   const ev = new Set(f.insectEvidence);

@@ -9,7 +9,8 @@ import type { DecayRisk } from './types';
 
 /**
  * Air temperatures accepted for EMC, °C. Table 4-2 starts at 30 °F (−1.1 °C); below that the
- * equation is extrapolated, smoothly. The range matches the survey form's shop-climate range.
+ * equation is extrapolated, smoothly. The range is wider than the survey form's shop-climate
+ * range (−30 to 60 °C), so every temperature the form accepts is valid here.
  */
 export const EMC_TEMP_RANGE_C = { min: -30, max: 70 } as const;
 

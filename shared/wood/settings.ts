@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { SPECIES_KEYS } from '../body-plans/schema';
-import { VERDICT_OPTIONS, type VerdictRules } from './types';
+import { VERDICT_OPTIONS } from './types';
 
 /**
  * Common practice defaults (rules of thumb of the trade, not published rules); every workshop
@@ -14,18 +14,25 @@ export const DEFAULT_VERDICT_RULES: VerdictRules = {
   replaceAssemblyMinMembers: 3,
 };
 
+/** Workshop-configurable thresholds: common practice defaults, not published rules. */
 export const verdictRulesSchema = z
   .object({
+    /** Keep the member when at least this share of its section modulus remains (0–1). */
     keepMinSectionModulusRatio: z.number().min(0).max(1),
+    /** Consolidate (harden, fill) when at least this much remains and the damage is local. */
     consolidateMinSectionModulusRatio: z.number().min(0).max(1),
+    /** Splice in new wood when the affected length is at most this share of the member length (0–1). */
     spliceMaxAffectedLengthRatio: z.number().min(0).max(1),
+    /** Damage at a joint or fitting (hinge, lock, belt or seat mounting) on a structural member → no consolidation. */
     jointDamageRulesOutConsolidation: z.boolean(),
+    /** Replace the whole assembly when at least this many of its members need replacement. */
     replaceAssemblyMinMembers: z.number().int().min(1).max(50),
   })
   .refine((r) => r.consolidateMinSectionModulusRatio <= r.keepMinSectionModulusRatio, {
     message: 'The consolidate threshold must not be above the keep threshold',
     path: ['consolidateMinSectionModulusRatio'],
   });
+export type VerdictRules = z.infer<typeof verdictRulesSchema>;
 
 /** Hours per operation, common practice defaults for an ash-framed body member. */
 export const DEFAULT_HOURS: Record<(typeof VERDICT_OPTIONS)[number], number> = {

@@ -3,6 +3,9 @@
  * millimetres, °C and percent unless a name says inches.
  */
 import type { StructuralClass, SpeciesKey } from '../body-plans/schema';
+import type { DECAY_TYPES } from '../schemas/finding';
+
+type DecayType = (typeof DECAY_TYPES)[number];
 
 export type DecayFaces = { top?: number; bottom?: number; left?: number; right?: number };
 
@@ -62,7 +65,7 @@ export interface AgentEvidence {
   wings?: boolean;
   woodType?: 'hardwood' | 'softwood' | null;
   moisturePercent?: number | null;
-  decayType?: 'brown-rot' | 'white-rot' | 'soft-rot' | 'none' | 'unknown' | null;
+  decayType?: DecayType | null;
 }
 
 export interface AgentCandidate {
@@ -85,20 +88,6 @@ export type VerdictOption = (typeof VERDICT_OPTIONS)[number];
 
 export const DECISION_CLASSES = ['structural-must-fix', 'cosmetic', 'monitor'] as const;
 export type DecisionClass = (typeof DECISION_CLASSES)[number];
-
-/** Workshop-configurable thresholds: common practice defaults, not published rules. */
-export interface VerdictRules {
-  /** Keep the member when at least this share of its section modulus remains (0–1). */
-  keepMinSectionModulusRatio: number;
-  /** Consolidate (harden, fill) when at least this much remains and the damage is local. */
-  consolidateMinSectionModulusRatio: number;
-  /** Splice in new wood when the affected length is at most this share of the member length (0–1). */
-  spliceMaxAffectedLengthRatio: number;
-  /** Damage at a joint or fitting (hinge, lock, belt or seat mounting) on a structural member → no consolidation. */
-  jointDamageRulesOutConsolidation: boolean;
-  /** Replace the whole assembly when at least this many of its members need replacement. */
-  replaceAssemblyMinMembers: number;
-}
 
 export interface VerdictInput {
   structuralClass: StructuralClass;

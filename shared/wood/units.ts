@@ -3,9 +3,10 @@
  * and °C and shows metric or imperial per the workshop's setting. 1 in = 25.4 mm exactly
  * (international inch, 1959).
  */
+import type { UNITS } from '../schemas/workshop';
 import { requireFinite } from './errors';
 
-export type UnitSystem = 'metric' | 'imperial';
+export type UnitSystem = (typeof UNITS)[number];
 
 export const MM_PER_IN = 25.4;
 

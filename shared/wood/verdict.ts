@@ -8,15 +8,15 @@
  * members of the assembly). Every step only ever raises the option, so more damage can never
  * give a milder verdict, all else equal.
  */
+import { STRUCTURAL_CLASSES } from '../body-plans/schema';
 import { DomainError, requireInRange, requireNonNegative, requirePositive } from './errors';
-import { DEFAULT_VERDICT_RULES } from './settings';
+import { DEFAULT_VERDICT_RULES, type VerdictRules } from './settings';
 import {
   VERDICT_OPTIONS,
   type DecisionClass,
   type Verdict,
   type VerdictInput,
   type VerdictOption,
-  type VerdictRules,
 } from './types';
 
 /** Order of severity of the options: keep < consolidate < splice < replace-member < replace-assembly. */
@@ -46,13 +46,13 @@ export const VERDICT_OPTION_LABELS: Record<VerdictOption, string> = {
 };
 
 export const DECISION_CLASS_LABELS: Record<DecisionClass, string> = {
-  'structural-must-fix': 'Structural: must fix',
+  'structural-must-fix': 'Structural, must fix',
   cosmetic: 'Cosmetic',
   monitor: 'Monitor',
 };
 
 function validate(input: VerdictInput, rules: VerdictRules): void {
-  if (!['primary', 'secondary', 'non-structural'].includes(input.structuralClass)) {
+  if (!(STRUCTURAL_CLASSES as readonly string[]).includes(input.structuralClass)) {
     throw new DomainError(
       'structuralClass',
       `Unknown structural class "${input.structuralClass}".`,
