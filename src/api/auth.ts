@@ -13,7 +13,6 @@ import { STALE } from './query-client';
 
 export const authKeys = {
   root: ['auth'] as const,
-  session: () => [...authKeys.root, 'session'] as const,
   invitation: (token: string) => [...authKeys.root, 'invitation', token] as const,
 };
 
@@ -61,8 +60,6 @@ export async function acceptInvitation(
 }
 
 export const authQueries = {
-  session: () =>
-    queryOptions({ queryKey: authKeys.session(), queryFn: fetchSession, staleTime: STALE.session }),
   invitation: (token: string) =>
     queryOptions({
       queryKey: authKeys.invitation(token),

@@ -7,7 +7,6 @@ import {
   type SaveDecisionRequest,
 } from '@/shared/schemas/decision';
 import { request } from './client';
-import { STALE } from './query-client';
 
 const decisionList = z.object({ items: z.array(decisionResponse) });
 const base = (wid: string, vid: string) => `/api/workshops/${wid}/vehicles/${vid}/decisions`;
@@ -27,7 +26,6 @@ export const decisionQueries = {
       queryKey: decisionKeys.list(wid, vid),
       queryFn: async ({ signal }) =>
         (await request('GET', base(wid, vid), { schema: decisionList, signal })).items,
-      staleTime: STALE.short,
     }),
 };
 

@@ -17,7 +17,6 @@ import {
 } from '@/shared/schemas';
 import { request } from './client';
 import { newId, queryString } from './ids';
-import { STALE } from './query-client';
 import { surveyKeys } from './surveys';
 import { invalidateVehicles } from './vehicles';
 
@@ -50,14 +49,12 @@ export const findingQueries = {
             },
           )
         ).items,
-      staleTime: STALE.short,
     }),
   detail: (wid: string, fid: string) =>
     queryOptions({
       queryKey: findingKeys.detail(wid, fid),
       queryFn: ({ signal }) =>
         request('GET', findingPath(wid, fid), { schema: findingResponse, signal }),
-      staleTime: STALE.short,
     }),
 };
 

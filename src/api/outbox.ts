@@ -18,7 +18,6 @@ export const outboxQueries = {
       queryKey: outboxKeys.list(),
       queryFn: async ({ signal }) =>
         (await request('GET', '/api/dev/outbox', { schema: outboxList, signal })).items,
-      staleTime: STALE.short,
     }),
 };
 

@@ -7,8 +7,6 @@ export const STALE = {
   short: 30_000,
   /** Members, invitations and workshop settings change rarely. */
   medium: 5 * 60_000,
-  /** The session only changes on sign-in/out, which write it directly. */
-  session: Infinity,
 } as const;
 
 /** Retry network and server trouble, never a 4xx: the same request would fail the same way. */

@@ -13,7 +13,6 @@ import {
 import { updatePreferencesRequest } from '@/shared/schemas/auth';
 import { API_BASE, request } from './client';
 import { queryString } from './ids';
-import { STALE } from './query-client';
 import { invalidateTreatmentWork } from './treatments';
 
 const recheckList = z.object({ items: z.array(recheckResponse) });
@@ -39,7 +38,6 @@ export const recheckQueries = {
             signal,
           })
         ).items,
-      staleTime: STALE.short,
     }),
   due: (wid: string, query: DueQuery = {}) =>
     queryOptions({
@@ -49,7 +47,6 @@ export const recheckQueries = {
           schema: dueListResponse,
           signal,
         }),
-      staleTime: STALE.short,
     }),
 };
 

@@ -12,7 +12,6 @@ import {
 } from '@/shared/schemas/report';
 import { ApiRequestError, cleanError, request } from './client';
 import { newId } from './ids';
-import { STALE } from './query-client';
 
 const reportList = z.object({ items: z.array(reportResponse) });
 const shareList = z.object({ items: z.array(shareResponse) });
@@ -41,7 +40,6 @@ export const reportQueries = {
       queryFn: async ({ signal }) =>
         (await request('GET', `${vehiclePath(wid, vid)}/reports`, { schema: reportList, signal }))
           .items,
-      staleTime: STALE.short,
       refetchInterval: (q) => (q.state.data?.some(isGenerating) ? REPORT_POLL_MS : false),
     }),
   detail: (wid: string, rid: string) =>
@@ -49,7 +47,6 @@ export const reportQueries = {
       queryKey: reportKeys.detail(wid, rid),
       queryFn: ({ signal }) =>
         request('GET', reportPath(wid, rid), { schema: reportResponse, signal }),
-      staleTime: STALE.short,
       refetchInterval: (q) => (q.state.data && isGenerating(q.state.data) ? REPORT_POLL_MS : false),
     }),
   shares: (wid: string, rid: string) =>
@@ -58,7 +55,6 @@ export const reportQueries = {
       queryFn: async ({ signal }) =>
         (await request('GET', `${reportPath(wid, rid)}/shares`, { schema: shareList, signal }))
           .items,
-      staleTime: STALE.short,
     }),
 };
 

@@ -3,7 +3,6 @@ import { z } from 'zod';
 import { createSurveyRequest, surveyResponse, type CreateSurveyRequest } from '@/shared/schemas';
 import { request } from './client';
 import { newId } from './ids';
-import { STALE } from './query-client';
 import { invalidateVehicles } from './vehicles';
 
 const surveyList = z.object({ items: z.array(surveyResponse) });
@@ -25,7 +24,6 @@ export const surveyQueries = {
             signal,
           })
         ).items,
-      staleTime: STALE.short,
     }),
 };
 

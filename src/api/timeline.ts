@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { timelineItem, type TimelineKind } from '@/shared/schemas/recheck';
 import { request } from './client';
-import { STALE } from './query-client';
+import { queryString } from './ids';
 
 const timelineList = z.object({ items: z.array(timelineItem) });
 
@@ -22,12 +22,10 @@ export const timelineQueries = {
         (
           await request(
             'GET',
-            `/api/workshops/${wid}/vehicles/${vid}/timeline` +
-              (kinds.length ? `?kinds=${kinds.join(',')}` : ''),
+            `/api/workshops/${wid}/vehicles/${vid}/timeline${queryString({ kinds: kinds.join(',') })}`,
             { schema: timelineList, signal },
           )
         ).items,
-      staleTime: STALE.short,
     }),
 };
 

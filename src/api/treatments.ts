@@ -15,18 +15,17 @@ import {
 } from '@/shared/schemas/treatment';
 import { zoneStateResponse } from '@/shared/schemas/recheck';
 import { request } from './client';
-import { findingKeys } from './findings';
+import { invalidateAfterFindingWrite } from './findings';
 import { newId } from './ids';
-import { STALE } from './query-client';
+import { recheckKeys } from './rechecks';
+import { timelineKeys } from './timeline';
 
-const treatmentList = z.object({ items: z.array(treatmentResponse) });
 const zoneStateList = z.object({ items: z.array(zoneStateResponse) });
 const vehiclePath = (wid: string, vid: string) => `/api/workshops/${wid}/vehicles/${vid}`;
 
 export const treatmentKeys = {
   root: ['treatments'] as const,
   workshop: (wid: string) => [...treatmentKeys.root, wid] as const,
-  list: (wid: string, vid: string) => [...treatmentKeys.workshop(wid), 'vehicle', vid] as const,
   detail: (wid: string, tid: string) => [...treatmentKeys.workshop(wid), 'detail', tid] as const,
 };
 /** Zone states are derived on the server from findings, treatments and re-checks together. */
@@ -37,18 +36,6 @@ export const zoneStateKeys = {
 };
 
 export const treatmentQueries = {
-  list: (wid: string, vid: string) =>
-    queryOptions({
-      queryKey: treatmentKeys.list(wid, vid),
-      queryFn: async ({ signal }) =>
-        (
-          await request('GET', `${vehiclePath(wid, vid)}/treatments`, {
-            schema: treatmentList,
-            signal,
-          })
-        ).items,
-      staleTime: STALE.short,
-    }),
   detail: (wid: string, tid: string) =>
     queryOptions({
       queryKey: treatmentKeys.detail(wid, tid),
@@ -57,7 +44,6 @@ export const treatmentQueries = {
           schema: treatmentResponse,
           signal,
         }),
-      staleTime: STALE.short,
     }),
   zoneStates: (wid: string, vid: string) =>
     queryOptions({
@@ -69,13 +55,8 @@ export const treatmentQueries = {
             signal,
           })
         ).items,
-      staleTime: STALE.short,
     }),
 };
-
-export function useTreatments(wid: string, vid: string) {
-  return useQuery(treatmentQueries.list(wid, vid));
-}
 
 export function useTreatment(wid: string, tid: string) {
   return useQuery(treatmentQueries.detail(wid, tid));
@@ -90,15 +71,15 @@ export function useZoneStates(wid: string, vid: string) {
  * zone states, the timeline and findings (fresh evidence logs one) all change.
  */
 export function invalidateTreatmentWork(queryClient: QueryClient, wid: string) {
-  return Promise.all(
-    [
+  return Promise.all([
+    ...[
       treatmentKeys.workshop(wid),
-      ['rechecks', wid],
+      recheckKeys.workshop(wid),
       zoneStateKeys.workshop(wid),
-      ['timeline', wid],
-      findingKeys.workshop(wid),
+      timelineKeys.workshop(wid),
     ].map((queryKey) => queryClient.invalidateQueries({ queryKey })),
-  );
+    invalidateAfterFindingWrite(queryClient, wid),
+  ]);
 }
 
 /** The body should carry an id made once per form (see `newId`) so a retry stays one treatment. */

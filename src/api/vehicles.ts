@@ -11,7 +11,6 @@ import {
 } from '@/shared/schemas';
 import { request } from './client';
 import { newId, queryString } from './ids';
-import { STALE } from './query-client';
 
 export type VehicleListQuery = z.input<typeof vehicleListQuery>;
 
@@ -33,14 +32,12 @@ export const vehicleQueries = {
       queryFn: async ({ signal }) =>
         (await request('GET', base(wid) + queryString(query), { schema: vehicleList, signal }))
           .items,
-      staleTime: STALE.short,
     }),
   detail: (wid: string, vid: string) =>
     queryOptions({
       queryKey: vehicleKeys.detail(wid, vid),
       queryFn: ({ signal }) =>
         request('GET', `${base(wid)}/${vid}`, { schema: vehicleResponse, signal }),
-      staleTime: STALE.short,
     }),
 };
 

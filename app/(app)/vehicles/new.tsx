@@ -4,6 +4,7 @@ import { createVehicleRequest } from '@/shared/schemas';
 import { can } from '@/shared/roles';
 import { newId } from '@/src/api/ids';
 import { useCreateVehicle } from '@/src/api/vehicles';
+import { goBack } from '@/src/components/nav/go-back';
 import { EmptyState, Screen, useFormSubmit, useToast } from '@/src/components/ui';
 import { VehicleForm, vehicleToForm } from '@/src/components/vehicles/vehicle-form';
 import { vehicleTitle } from '@/src/components/vehicles/vehicle-labels';
@@ -41,7 +42,7 @@ export default function NewVehicle() {
         initial={vehicleToForm()}
         submitLabel="Add vehicle"
         onSubmit={form.submit}
-        onCancel={() => (router.canGoBack() ? router.back() : router.replace('/vehicles'))}
+        onCancel={() => goBack('/vehicles')}
         errors={form.errors}
         message={form.message}
         busy={form.busy}

@@ -2,8 +2,8 @@ import { useCallback, useId, useMemo, useState } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Circle, G, Polygon, Polyline, Text as SvgText } from 'react-native-svg';
 import {
-  getZone,
   polygonCentroid,
+  zoneLabel,
   type BodyPlan,
   type BodyPlanView,
   type ViewKey,
@@ -124,7 +124,7 @@ export function BodyDiagram({
             zone={z}
             summary={zoneSummaries[z.key]}
             accessibilityLabel={[
-              zoneAccessibilityLabel(getZone(plan, z.key)?.label ?? z.key, zoneSummaries[z.key]),
+              zoneAccessibilityLabel(zoneLabel(plan, z.key), zoneSummaries[z.key]),
               zoneStateLabel(zoneStates?.[z.key]),
             ]
               .filter(Boolean)

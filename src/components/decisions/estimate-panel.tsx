@@ -1,10 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 import type { RepairEstimate, VerdictOption } from '@/shared/wood/types';
-import { AppText } from '@/src/components/ui';
+import { AppText, Card } from '@/src/components/ui';
 import { CutListLine } from '@/src/components/wood/cut-list-line';
 import { hours, money, OPTION_LABELS, type Units } from '@/src/components/wood/labels';
 import { SpliceCard } from '@/src/components/wood/splice-card';
-import { colors, fonts, radius, spacing } from '@/src/theme';
+import { colors, fonts, spacing } from '@/src/theme';
 
 type Props = {
   option: VerdictOption;
@@ -25,7 +25,7 @@ export function EstimatePanel({
   units,
 }: Props) {
   return (
-    <View style={styles.panel} testID="decision-estimate">
+    <Card testID="decision-estimate">
       <AppText variant="label">Estimate: {OPTION_LABELS[option].label.toLowerCase()}</AppText>
       {estimate.splice ? <SpliceCard splice={estimate.splice} units={units} /> : null}
       {estimate.cutList.length ? (
@@ -79,7 +79,7 @@ export function EstimatePanel({
           ))}
         </View>
       ) : null}
-    </View>
+    </Card>
   );
 }
 
@@ -105,14 +105,6 @@ function Row({
 }
 
 const styles = StyleSheet.create({
-  panel: {
-    gap: spacing.sm,
-    padding: spacing.lg,
-    borderRadius: radius.lg,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
   totals: {
     gap: spacing.xs,
     paddingTop: spacing.sm,

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { SPECIES_KEYS } from '@/shared/body-plans';
 import { SPECIES_LABELS } from '@/src/components/findings/labels';
 import { FACES, type Face } from '@/src/components/findings/form-values';
-import { AppText, Checkbox, Select, TextField } from '@/src/components/ui';
+import { AppText, Checkbox, NUMERIC_INPUT, Select, TextField } from '@/src/components/ui';
 import type { Units } from '@/src/components/wood/labels';
 import { spacing } from '@/src/theme';
 import { lengthUnit, type DecisionErrors, type DecisionFormValues } from './decision-values';
@@ -14,7 +14,6 @@ const FACE_LABELS: Record<Face, string> = {
   right: 'Right face',
 };
 const speciesOptions = SPECIES_KEYS.map((v) => ({ value: v, label: SPECIES_LABELS[v] }));
-const numeric = { keyboardType: 'decimal-pad' as const, inputMode: 'decimal' as const };
 
 type Props = {
   values: DecisionFormValues;
@@ -44,7 +43,7 @@ export function Measurements({ values, onChange, errors, units, source }: Props)
             onChangeText={(width) => onChange({ width })}
             error={err('inputs.widthMm')}
             testID="decision-width"
-            {...numeric}
+            {...NUMERIC_INPUT}
           />
         </View>
         <View style={styles.cell}>
@@ -56,7 +55,7 @@ export function Measurements({ values, onChange, errors, units, source }: Props)
             onChangeText={(depth) => onChange({ depth })}
             error={err('inputs.depthMm')}
             testID="decision-depth"
-            {...numeric}
+            {...NUMERIC_INPUT}
           />
         </View>
       </View>
@@ -72,7 +71,7 @@ export function Measurements({ values, onChange, errors, units, source }: Props)
               error={err(`inputs.decayMm.${face}`)}
               placeholder="0"
               testID={`decision-decay-${face}`}
-              {...numeric}
+              {...NUMERIC_INPUT}
             />
           </View>
         ))}
@@ -86,7 +85,7 @@ export function Measurements({ values, onChange, errors, units, source }: Props)
             onChangeText={(affectedLength) => onChange({ affectedLength })}
             error={err('inputs.affectedLengthMm')}
             testID="decision-affected-length"
-            {...numeric}
+            {...NUMERIC_INPUT}
           />
         </View>
         <View style={styles.cell}>
@@ -97,7 +96,7 @@ export function Measurements({ values, onChange, errors, units, source }: Props)
             onChangeText={(memberLength) => onChange({ memberLength })}
             error={err('inputs.memberLengthMm')}
             testID="decision-member-length"
-            {...numeric}
+            {...NUMERIC_INPUT}
           />
         </View>
       </View>

@@ -1,10 +1,10 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import type { DecisionResponse, WorkshopSettings } from '@/shared/schemas';
-import { ApiRequestError, cleanError } from '@/src/api/client';
+import { cleanError } from '@/src/api/client';
 import { decisionQueries, useDeleteDecision, useSaveDecision } from '@/src/api/decisions';
 import type { Face } from '@/src/components/findings/form-values';
-import { useToast } from '@/src/components/ui';
+import { FIELDS_NEED_ATTENTION, saveFailure, useToast } from '@/src/components/ui';
 import {
   parseInputs,
   pathsOf,
@@ -89,11 +89,10 @@ export function useDecisionForm({ wid, vehicleId, ctx, decision, settings }: Arg
       setSubmitErrors({});
       toast.show('Decision saved', { kind: 'success' });
     } catch (e) {
-      if (e instanceof ApiRequestError && e.status === 409) setConflict(true);
-      else if (e instanceof ApiRequestError && e.fields) {
-        setSubmitErrors(e.fields);
-        toast.show('Some fields need attention. See the messages beside them.', { kind: 'error' });
-      } else toast.show(cleanError(e), { kind: 'error' });
+      const f = saveFailure(e);
+      if (f.conflict) return setConflict(true);
+      if (f.message === null) setSubmitErrors(f.fields);
+      toast.show(f.message ?? FIELDS_NEED_ATTENTION, { kind: 'error' });
     }
   }
 

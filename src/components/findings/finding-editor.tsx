@@ -4,10 +4,10 @@ import { StyleSheet, View } from 'react-native';
 import type { BodyPlan } from '@/shared/body-plans';
 import { can, type Role } from '@/shared/roles';
 import type { FindingResponse } from '@/shared/schemas';
-import { ApiRequestError, cleanError } from '@/src/api/client';
+import { cleanError } from '@/src/api/client';
 import { findingQueries, useCreateFinding, useUpdateFinding } from '@/src/api/findings';
 import { newId } from '@/src/api/ids';
-import { AppText, Button, useToast } from '@/src/components/ui';
+import { AppText, Button, FIELDS_NEED_ATTENTION, saveFailure, useToast } from '@/src/components/ui';
 import type { Units } from '@/src/components/wood/labels';
 import type { ShopClimate } from '@/src/components/wood/moisture';
 import { colors, radius, spacing } from '@/src/theme';
@@ -108,11 +108,10 @@ export function FindingEditor({
   };
 
   function failed(e: unknown) {
-    if (e instanceof ApiRequestError && e.status === 409) setConflict(true);
-    else if (e instanceof ApiRequestError && e.fields) {
-      setErrors(e.fields);
-      toast.show('Some fields need attention. See the messages beside them.', { kind: 'error' });
-    } else toast.show(cleanError(e), { kind: 'error' });
+    const f = saveFailure(e);
+    if (f.conflict) return setConflict(true);
+    if (f.message === null) setErrors(f.fields);
+    toast.show(f.message ?? FIELDS_NEED_ATTENTION, { kind: 'error' });
   }
 
   async function save() {

@@ -5,10 +5,11 @@ import { ACTIVITY, DECAY_TYPES, PICK_TEST, PICK_TEST_LABELS } from '@/shared/sch
 import {
   AppText,
   Checkbox,
+  FormSection,
+  NUMERIC_INPUT,
   SegmentedControl,
   Select,
   TextField,
-  FormSection,
 } from '@/src/components/ui';
 import { AgentsPanel, hasAgentEvidence } from '@/src/components/wood/agents-panel';
 import type { Units } from '@/src/components/wood/labels';
@@ -53,7 +54,6 @@ type Props = {
 /** Every field of a finding, grouped in the order an inspector works a member. */
 export function FindingForm({ plan, values, onChange, errors, photos, climate, units }: Props) {
   const err = (path: string) => fieldError(errors, path);
-  const numeric = { keyboardType: 'decimal-pad' as const, inputMode: 'decimal' as const };
   const hole = parseNumber(values.holeDiameterMm);
   const holeDiameterMm = hole === null || Number.isNaN(hole) ? null : hole;
   const moisture = readMoisture({ ...values, climate }).reading;
@@ -105,7 +105,7 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
           onChangeText={(holeDiameterMm) => onChange({ holeDiameterMm })}
           error={err('holeDiameterMm')}
           testID="finding-hole"
-          {...numeric}
+          {...NUMERIC_INPUT}
         />
         <SegmentedControl
           label="Activity"
@@ -135,7 +135,7 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
               onChangeText={(meterReading) => onChange({ meterReading })}
               error={err('moisture.meterReading')}
               testID="finding-meter"
-              {...numeric}
+              {...NUMERIC_INPUT}
             />
           </View>
           <View style={styles.half}>
@@ -146,7 +146,7 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
               onChangeText={(woodTempC) => onChange({ woodTempC })}
               error={err('moisture.woodTempC')}
               testID="finding-wood-temp"
-              {...numeric}
+              {...NUMERIC_INPUT}
             />
           </View>
         </View>
@@ -189,7 +189,7 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
                 }
                 error={err(`decayDepthMm.${face}`)}
                 testID={'finding-depth-' + face}
-                {...numeric}
+                {...NUMERIC_INPUT}
               />
             </View>
           ))}
@@ -202,7 +202,7 @@ export function FindingForm({ plan, values, onChange, errors, photos, climate, u
           onChangeText={(affectedLengthMm) => onChange({ affectedLengthMm })}
           error={err('affectedLengthMm')}
           testID="finding-length"
-          {...numeric}
+          {...NUMERIC_INPUT}
         />
       </FormSection>
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { getZone, type BodyPlan } from '@/shared/body-plans';
+import { zoneLabel, type BodyPlan } from '@/shared/body-plans';
 import { recordRecheckRequest, type RecheckResponse } from '@/shared/schemas/recheck';
 import { useRecordRecheck } from '@/src/api/rechecks';
 import { EvidenceChips } from '@/src/components/findings/evidence-chips';
@@ -114,7 +114,7 @@ export function RecheckResultForm({
               {recheck.zoneKeys.map((k) => (
                 <ChipToggle
                   key={k}
-                  label={getZone(plan, k)?.label ?? k}
+                  label={zoneLabel(plan, k)}
                   checked={zoneKey === k}
                   onChange={() => setZoneKey(k)}
                   testID={`recheck-zone-${k}`}

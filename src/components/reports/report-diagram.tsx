@@ -1,10 +1,10 @@
 import { useState } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet } from 'react-native';
 import { getBodyPlan, getZone, type ViewKey } from '@/shared/body-plans';
 import type { ReportSummary } from '@/shared/schemas/report';
 import { BodyDiagram, DiagramLegend, ViewSwitcher } from '@/src/components/body-diagram';
-import { AppText } from '@/src/components/ui';
-import { colors, radius, spacing } from '@/src/theme';
+import { AppText, Card } from '@/src/components/ui';
+import { spacing } from '@/src/theme';
 
 /**
  * The body drawing of a shared report: the same shading, numbers and hatching as the PDF, for a
@@ -18,7 +18,7 @@ export function ReportDiagram({ diagram }: { diagram: NonNullable<ReportSummary[
   const zone = picked ? getZone(plan, picked) : undefined;
   const summary = picked ? diagram.zones[picked] : undefined;
   return (
-    <View style={styles.card} testID="public-diagram">
+    <Card style={styles.card} testID="public-diagram">
       <ViewSwitcher plan={plan} value={view} onChange={setView} />
       <BodyDiagram
         plan={plan}
@@ -38,17 +38,10 @@ export function ReportDiagram({ diagram }: { diagram: NonNullable<ReportSummary[
           : 'Tap a member to see its name and worst severity.'}
       </AppText>
       <DiagramLegend />
-    </View>
+    </Card>
   );
 }
 
 const styles = StyleSheet.create({
-  card: {
-    gap: spacing.sm,
-    padding: spacing.md,
-    borderRadius: radius.lg,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  card: { padding: spacing.md },
 });

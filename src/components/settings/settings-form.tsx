@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { SPECIES_KEYS } from '@/shared/body-plans';
 import { VERDICT_OPTIONS } from '@/shared/wood';
 import { SPECIES_LABELS } from '@/src/components/findings/labels';
-import { AppText, Checkbox, SegmentedControl, TextField } from '@/src/components/ui';
+import { AppText, Checkbox, NUMERIC_INPUT, SegmentedControl, TextField } from '@/src/components/ui';
 import { OPTION_LABELS } from '@/src/components/wood/labels';
 import { spacing } from '@/src/theme';
 import { Cell, Section } from './settings-section';
@@ -17,7 +17,6 @@ const paperOptions = [
   { value: 'A4' as const, label: 'A4' },
   { value: 'Letter' as const, label: 'US Letter' },
 ];
-const numeric = { keyboardType: 'decimal-pad' as const, inputMode: 'decimal' as const };
 const RULES = 'settings.wood.verdictRules';
 
 type Props = {
@@ -55,7 +54,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
               onChangeText={(labourRatePerHour) => onChange({ labourRatePerHour })}
               error={errors['settings.labourRatePerHour']}
               testID="settings-labour-rate"
-              {...numeric}
+              {...NUMERIC_INPUT}
             />
           </Cell>
           <Cell>
@@ -85,7 +84,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
           onChangeText={(keepPercent) => onChange({ keepPercent })}
           error={errors[`${RULES}.keepMinSectionModulusRatio`]}
           testID="settings-keep"
-          {...numeric}
+          {...NUMERIC_INPUT}
         />
         <TextField
           label="Consolidate when at least this much remains"
@@ -95,7 +94,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
           onChangeText={(consolidatePercent) => onChange({ consolidatePercent })}
           error={errors[`${RULES}.consolidateMinSectionModulusRatio`]}
           testID="settings-consolidate"
-          {...numeric}
+          {...NUMERIC_INPUT}
         />
         <TextField
           label="Splice when the damage covers at most this much of the member"
@@ -105,7 +104,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
           onChangeText={(splicePercent) => onChange({ splicePercent })}
           error={errors[`${RULES}.spliceMaxAffectedLengthRatio`]}
           testID="settings-splice"
-          {...numeric}
+          {...NUMERIC_INPUT}
         />
         <Checkbox
           label="Damage at a joint or fitting rules out consolidation"
@@ -133,7 +132,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
           onChangeText={(scarfSlope) => onChange({ scarfSlope })}
           error={errors['settings.wood.scarfSlope']}
           testID="settings-scarf-slope"
-          {...numeric}
+          {...NUMERIC_INPUT}
         />
       </Section>
 
@@ -148,7 +147,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
                 onChangeText={(v) => onChange({ hours: { ...values.hours, [o]: v } })}
                 error={errors[`settings.wood.hoursPerOperation.${o}`]}
                 testID={`settings-hours-${o}`}
-                {...numeric}
+                {...NUMERIC_INPUT}
               />
             </Cell>
           ))}
@@ -164,7 +163,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
           onChangeText={(wastePercent) => onChange({ wastePercent })}
           error={errors['settings.wood.wasteFactorPercent']}
           testID="settings-waste"
-          {...numeric}
+          {...NUMERIC_INPUT}
         />
         <AppText variant="label">Price per board foot, rough stock</AppText>
         <View style={styles.grid}>
@@ -177,7 +176,7 @@ export function SettingsForm({ values, onChange, errors }: Props) {
                 onChangeText={(v) => onChange({ prices: { ...values.prices, [k]: v } })}
                 error={errors[`settings.wood.timberPricePerBoardFoot.${k}`]}
                 testID={`settings-price-${k}`}
-                {...numeric}
+                {...NUMERIC_INPUT}
               />
             </Cell>
           ))}

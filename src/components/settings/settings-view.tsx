@@ -3,10 +3,10 @@ import { StyleSheet, View } from 'react-native';
 import { SPECIES_KEYS } from '@/shared/body-plans';
 import { PLAN_GROUP_LABELS, PLAN_GROUPS } from '@/shared/treatments';
 import type { WorkshopSettings } from '@/shared/schemas';
-import { VERDICT_OPTIONS } from '@/shared/wood';
+import { percent, VERDICT_OPTIONS } from '@/shared/wood';
 import { SPECIES_LABELS } from '@/src/components/findings/labels';
 import { AppText, Card } from '@/src/components/ui';
-import { hours, money, OPTION_LABELS, percent } from '@/src/components/wood/labels';
+import { hours, money, OPTION_LABELS } from '@/src/components/wood/labels';
 import { fonts, spacing } from '@/src/theme';
 
 /** The workshop's settings as a reader sees them (only the owner changes them). */

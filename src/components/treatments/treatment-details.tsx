@@ -1,8 +1,11 @@
 import { format } from 'date-fns';
 import { StyleSheet, View } from 'react-native';
-import { getZone, type BodyPlan } from '@/shared/body-plans';
-import { TREATMENT_METHOD_LABELS, type TreatmentResponse } from '@/shared/schemas/treatment';
-import { AGENT_LABELS } from '@/shared/wood';
+import { zoneLabel, type BodyPlan } from '@/shared/body-plans';
+import {
+  TREATMENT_METHOD_LABELS,
+  TREATMENT_TARGET_LABELS,
+  type TreatmentResponse,
+} from '@/shared/schemas/treatment';
 import { AppText, Card } from '@/src/components/ui';
 import { colors, spacing } from '@/src/theme';
 
@@ -14,7 +17,7 @@ export function TreatmentDetails({
   treatment: TreatmentResponse;
   plan?: BodyPlan;
 }) {
-  const zones = t.zoneKeys.map((k) => (plan && getZone(plan, k)?.label) || k).join(', ');
+  const zones = t.zoneKeys.map((k) => zoneLabel(plan, k)).join(', ');
   const rows: [string, string][] = [
     ['Applied', format(new Date(t.appliedAt), 'd MMM yyyy, HH:mm')],
     ['Applied by', t.applicatorName + (t.licenceNumber ? ` (licence ${t.licenceNumber})` : '')],
@@ -25,7 +28,7 @@ export function TreatmentDetails({
     ['Formulation', t.formulation || '—'],
     ['Dilution as mixed', t.dilution || '—'],
     ['Method', TREATMENT_METHOD_LABELS[t.method]],
-    ['Aimed at', t.targetAgent === 'unknown' ? 'Not known' : AGENT_LABELS[t.targetAgent]],
+    ['Aimed at', TREATMENT_TARGET_LABELS[t.targetAgent]],
     ['Quantity used', `${t.quantity.amount} ${t.quantity.unit}`],
     ['Area or length', t.areaTreated || '—'],
     ['Ventilation', t.ventilation || '—'],

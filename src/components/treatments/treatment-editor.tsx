@@ -6,14 +6,15 @@ import {
   createTreatmentRequest,
   type TreatmentResponse,
 } from '@/shared/schemas/treatment';
-import { ApiRequestError, cleanError } from '@/src/api/client';
 import { newId } from '@/src/api/ids';
 import { useCorrectTreatment, useCreateTreatment } from '@/src/api/treatments';
 import type { ZoneStateCue } from '@/src/components/body-diagram';
 import {
   Button,
   FieldErrorsNotice,
+  FIELDS_NEED_ATTENTION,
   FormMessage,
+  saveFailure,
   serverFieldErrors,
   TextField,
   useToast,
@@ -98,17 +99,10 @@ export function TreatmentEditor({
       );
       onDone(saved);
     } catch (e) {
-      const fields = serverFieldErrors(e);
-      setErrors(fields);
-      const onlyFields =
-        e instanceof ApiRequestError && e.status === 400 && Object.keys(fields).length > 0;
-      setMessage(onlyFields ? null : cleanError(e));
-      toast.show(
-        onlyFields ? 'Some fields need attention. See the messages beside them.' : cleanError(e),
-        {
-          kind: 'error',
-        },
-      );
+      setErrors(serverFieldErrors(e));
+      const { message } = saveFailure(e);
+      setMessage(message);
+      toast.show(message ?? FIELDS_NEED_ATTENTION, { kind: 'error' });
     }
   }
 

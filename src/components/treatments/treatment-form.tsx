@@ -4,12 +4,18 @@ import type { BodyPlan } from '@/shared/body-plans';
 import {
   TREATMENT_METHOD_LABELS,
   TREATMENT_METHODS,
+  TREATMENT_TARGET_LABELS,
   TREATMENT_TARGETS,
-  type TreatmentTarget,
 } from '@/shared/schemas/treatment';
-import { AGENT_LABELS } from '@/shared/wood';
 import type { ZoneStateCue } from '@/src/components/body-diagram';
-import { AppText, Checkbox, ChipToggle, TextField, FormSection } from '@/src/components/ui';
+import {
+  AppText,
+  Checkbox,
+  ChipToggle,
+  FormSection,
+  NUMERIC_INPUT,
+  TextField,
+} from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
 import { CautionsPanel } from './cautions-panel';
 import { TreatmentZonePicker } from './treatment-zone-picker';
@@ -18,8 +24,6 @@ import {
   type TreatmentFieldErrors,
   type TreatmentFormValues,
 } from './treatment-values';
-
-const targetLabel = (t: TreatmentTarget) => (t === 'unknown' ? 'Not known' : AGENT_LABELS[t]);
 
 type Props = {
   plan: BodyPlan;
@@ -41,7 +45,6 @@ export function TreatmentForm({
   region,
   zoneStates,
 }: Props) {
-  const numeric = { keyboardType: 'decimal-pad' as const, inputMode: 'decimal' as const };
   const text = (
     key: keyof TreatmentFormValues & keyof typeof FIELD_LABELS,
     testID: string,
@@ -134,7 +137,7 @@ export function TreatmentForm({
         <ChipChoice
           label="Aimed at"
           testID="treatment-target"
-          options={TREATMENT_TARGETS.map((t) => ({ value: t, label: targetLabel(t) }))}
+          options={TREATMENT_TARGETS.map((t) => ({ value: t, label: TREATMENT_TARGET_LABELS[t] }))}
           value={values.targetAgent}
           onChange={(targetAgent) => onChange({ targetAgent })}
           error={errors.targetAgent}
@@ -149,7 +152,7 @@ export function TreatmentForm({
               value={values.quantityAmount}
               onChangeText={(quantityAmount) => onChange({ quantityAmount })}
               testID="treatment-amount"
-              {...numeric}
+              {...NUMERIC_INPUT}
             />
           </View>
           <View style={styles.half}>
@@ -166,7 +169,7 @@ export function TreatmentForm({
         {text('reentryHours', 'treatment-reentry', {
           hint: 'From the label; 0 if it gives none.',
           suffix: 'h',
-          ...numeric,
+          ...NUMERIC_INPUT,
         })}
       </FormSection>
 
@@ -202,7 +205,7 @@ export function TreatmentForm({
               value={values.airTempC}
               onChangeText={(airTempC) => onChange({ airTempC })}
               testID="treatment-air-temp"
-              {...numeric}
+              {...NUMERIC_INPUT}
             />
           </View>
           <View style={styles.half}>
@@ -212,7 +215,7 @@ export function TreatmentForm({
               value={values.woodMoisturePercent}
               onChangeText={(woodMoisturePercent) => onChange({ woodMoisturePercent })}
               testID="treatment-wood-moisture"
-              {...numeric}
+              {...NUMERIC_INPUT}
             />
           </View>
         </View>

@@ -2,9 +2,9 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { BodyPlan, ViewKey } from '@/shared/body-plans';
 import { BodyDiagram, ViewSwitcher, type ZoneStateCue } from '@/src/components/body-diagram';
-import { AppText } from '@/src/components/ui';
+import { AppText, Card } from '@/src/components/ui';
 import { ZoneMultiPicker } from '@/src/components/vehicles/zone-multi-picker';
-import { colors, radius, spacing } from '@/src/theme';
+import { colors, spacing } from '@/src/theme';
 
 /** Zones treated, picked by tapping them on the drawing (tap again to drop), or from the list. */
 export function TreatmentZonePicker({
@@ -39,7 +39,7 @@ export function TreatmentZonePicker({
           {error}
         </AppText>
       ) : null}
-      <View style={styles.card}>
+      <Card style={styles.card}>
         <ViewSwitcher plan={plan} value={view} onChange={setView} />
         <BodyDiagram
           plan={plan}
@@ -52,7 +52,7 @@ export function TreatmentZonePicker({
           maxHeight={420}
           testID="treatment-diagram"
         />
-      </View>
+      </Card>
       <AppText variant="caption" testID="treatment-zone-count">
         {value.length === 0
           ? 'No zones chosen yet'
@@ -68,12 +68,5 @@ export function TreatmentZonePicker({
 const styles = StyleSheet.create({
   group: { gap: spacing.sm },
   error: { color: colors.danger },
-  card: {
-    gap: spacing.sm,
-    padding: spacing.md,
-    borderRadius: radius.lg,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  card: { padding: spacing.md },
 });

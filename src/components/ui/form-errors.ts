@@ -1,7 +1,10 @@
 import type { z } from 'zod';
-import { ApiRequestError } from '@/src/api/client';
+import { ApiRequestError, cleanError } from '@/src/api/client';
 
 export type FieldErrors = Record<string, string>;
+
+/** What the toast says when the server's field errors are shown beside their fields. */
+export const FIELDS_NEED_ATTENTION = 'Some fields need attention. See the messages beside them.';
 
 /** First message per top-level field of a failed client-side parse (same schema as the server). */
 export function zodFieldErrors(error: z.ZodError): FieldErrors {
@@ -22,4 +25,21 @@ export function serverFieldErrors(error: unknown): FieldErrors {
     if (!out[key]) out[key] = message;
   }
   return out;
+}
+
+export type SaveFailure = {
+  /** Someone else saved first (409): forms of versioned records offer a reload instead. */
+  conflict: boolean;
+  /** The server's field errors by full path (`moisture.meterReading`); empty for other failures. */
+  fields: FieldErrors;
+  /** One plain message, or null when the field errors say it all (a 400 with fields). */
+  message: string | null;
+};
+
+/** A failed save, sorted the same way by every form. */
+export function saveFailure(error: unknown): SaveFailure {
+  const api = error instanceof ApiRequestError ? error : undefined;
+  const fields = api?.fields ?? {};
+  const onlyFields = api?.status === 400 && Object.keys(fields).length > 0;
+  return { conflict: api?.status === 409, fields, message: onlyFields ? null : cleanError(error) };
 }

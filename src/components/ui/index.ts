@@ -7,9 +7,15 @@ export { ConfirmDialog } from './confirm-dialog';
 export { installFocusStyle } from './focus-style';
 export { Screen } from './screen';
 export { EmptyState, ErrorView, LoadingView } from './states';
-export { EmailField, TextField } from './text-field';
+export { EmailField, NUMERIC_INPUT, TextField } from './text-field';
 export { ToastProvider, useToast, type ToastKind, type ToastOptions } from './toast';
-export { serverFieldErrors, zodFieldErrors, type FieldErrors } from './form-errors';
+export {
+  FIELDS_NEED_ATTENTION,
+  saveFailure,
+  serverFieldErrors,
+  zodFieldErrors,
+  type FieldErrors,
+} from './form-errors';
 export { FieldErrorsNotice, FormMessage } from './form-message';
 export { useFormSubmit } from './use-form-submit';
 export { FormSection } from './form-section';

@@ -11,7 +11,9 @@ type Props = Omit<TextInputProps, 'style' | 'placeholderTextColor'> & {
   suffix?: string;
 };
 
-/** A labelled input; the error sits right under the label so it is read with the field. */
+/** Props of a field for a decimal number: the decimal keypad on phones, a hint to the web. */
+export const NUMERIC_INPUT = { keyboardType: 'decimal-pad', inputMode: 'decimal' } as const;
+
 /** An e-mail address field: no auto-capitalising, the e-mail keyboard. */
 export function EmailField(props: Omit<Props, 'label'> & { label?: string }) {
   return (
@@ -26,6 +28,7 @@ export function EmailField(props: Omit<Props, 'label'> & { label?: string }) {
   );
 }
 
+/** A labelled input; the error sits right under the label so it is read with the field. */
 export function TextField({ label, error, hint, suffix, multiline, testID, ...input }: Props) {
   const [focused, setFocused] = useState(false);
   return (

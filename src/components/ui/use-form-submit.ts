@@ -1,7 +1,6 @@
 import { useState } from 'react';
 import type { z } from 'zod';
-import { ApiRequestError, cleanError } from '@/src/api/client';
-import { serverFieldErrors, zodFieldErrors, type FieldErrors } from './form-errors';
+import { saveFailure, serverFieldErrors, zodFieldErrors, type FieldErrors } from './form-errors';
 
 /**
  * Validate with the shared schema, then send; field errors from either side land beside
@@ -30,11 +29,9 @@ export function useFormSubmit<S extends z.ZodType>(
       await send(parsed.data);
       return true;
     } catch (e) {
-      const fields = serverFieldErrors(e);
-      setErrors(fields);
-      const onlyFields =
-        e instanceof ApiRequestError && e.status === 400 && Object.keys(fields).length > 0;
-      setMessage(onlyFields ? null : (describe?.(e) ?? cleanError(e)));
+      setErrors(serverFieldErrors(e));
+      const { message } = saveFailure(e);
+      setMessage(message === null ? null : (describe?.(e) ?? message));
       return false;
     } finally {
       setBusy(false);

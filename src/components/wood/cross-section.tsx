@@ -1,12 +1,12 @@
 import { useId } from 'react';
 import { StyleSheet, View } from 'react-native';
 import Svg, { Defs, G, Line, Pattern, Rect, Text as SvgText } from 'react-native-svg';
-import { formatLength } from '@/shared/wood';
+import { formatLength, percent } from '@/shared/wood';
 import type { DecayFaces, ResidualSection } from '@/shared/wood/types';
 import { svgIdPrefix } from '@/src/components/body-diagram/hatch';
 import { AppText } from '@/src/components/ui';
 import { colors, fonts, radius, spacing } from '@/src/theme';
-import { percent, type Units } from './labels';
+import type { Units } from './labels';
 
 type Props = {
   widthMm: number;

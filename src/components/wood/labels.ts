@@ -1,4 +1,5 @@
 import type { WorkshopSettings } from '@/shared/schemas';
+import { DECISION_CLASS_LABELS, VERDICT_OPTION_LABELS } from '@/shared/wood';
 import type { DecayRiskLevel, DecisionClass, VerdictOption } from '@/shared/wood/types';
 import type { BadgeTone } from '@/src/components/ui';
 
@@ -16,32 +17,33 @@ export const DECAY_RISK_LABELS: Record<
 };
 
 export const OPTION_LABELS: Record<VerdictOption, { label: string; description: string }> = {
-  keep: { label: 'Keep', description: 'Leave the member in place; clean, dry and protect it.' },
+  keep: {
+    label: VERDICT_OPTION_LABELS.keep,
+    description: 'Leave the member in place; clean, dry and protect it.',
+  },
   consolidate: {
-    label: 'Consolidate',
+    label: VERDICT_OPTION_LABELS.consolidate,
     description: 'Harden the softened wood and fill it; the member stays.',
   },
   splice: {
-    label: 'Splice in new wood',
+    label: VERDICT_OPTION_LABELS.splice,
     description: 'Cut out the damaged length and scarf in a new piece.',
   },
-  'replace-member': { label: 'Replace the member', description: 'Make a new member of the frame.' },
+  'replace-member': {
+    label: VERDICT_OPTION_LABELS['replace-member'],
+    description: 'Make a new member of the frame.',
+  },
   'replace-assembly': {
-    label: 'Replace the assembly',
+    label: VERDICT_OPTION_LABELS['replace-assembly'],
     description: 'Rebuild the whole assembly it belongs to (a door frame, a roof frame).',
   },
 };
 
 export const CLASS_LABELS: Record<DecisionClass, { label: string; tone: BadgeTone }> = {
-  'structural-must-fix': { label: 'Structural, must fix', tone: 'danger' },
-  monitor: { label: 'Monitor', tone: 'caution' },
-  cosmetic: { label: 'Cosmetic', tone: 'neutral' },
+  'structural-must-fix': { label: DECISION_CLASS_LABELS['structural-must-fix'], tone: 'danger' },
+  monitor: { label: DECISION_CLASS_LABELS.monitor, tone: 'caution' },
+  cosmetic: { label: DECISION_CLASS_LABELS.cosmetic, tone: 'neutral' },
 };
-
-/** Whole percent rounded down, as the verdict reasons give it (89.6 % never shows as 90 %). */
-export function percent(ratio: number): string {
-  return `${Math.floor(ratio * 100 + 1e-9)} %`;
-}
 
 /** A money amount in the workshop's currency; an unknown code still shows the number. */
 export function money(amount: number, currency: string): string {

@@ -1,8 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import { formatLength } from '@/shared/wood';
+import { formatLength, percent } from '@/shared/wood';
 import { AppText } from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
-import { percent, type Units } from './labels';
+import type { Units } from './labels';
 
 type Props = {
   affectedLengthMm: number;

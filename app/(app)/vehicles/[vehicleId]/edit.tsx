@@ -10,6 +10,7 @@ import {
   useUpdateVehicle,
   useVehicle,
 } from '@/src/api/vehicles';
+import { goBack } from '@/src/components/nav/go-back';
 import {
   AppText,
   Button,
@@ -37,8 +38,7 @@ export default function EditVehicle() {
   const restore = useRestoreVehicle(wid);
   const [confirming, setConfirming] = useState(false);
   const [stale, setStale] = useState(false);
-  const back = () =>
-    router.canGoBack() ? router.back() : router.replace(`/vehicles/${vehicleId}`);
+  const back = () => goBack(`/vehicles/${vehicleId}`);
 
   const form = useFormSubmit(updateVehicleRequest, async (body) => {
     try {

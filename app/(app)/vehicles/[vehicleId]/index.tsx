@@ -3,9 +3,9 @@ import { useCallback, useMemo, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import {
   getBodyPlan,
-  getZone,
   polygonCentroid,
   VIEW_KEYS,
+  zoneLabel,
   type BodyPlan,
   type ViewKey,
 } from '@/shared/body-plans';
@@ -257,7 +257,7 @@ export default function VehicleOverview() {
         <VehicleRechecks
           vehicleId={vehicleId}
           rechecks={rechecks.data}
-          zoneLabel={(k) => getZone(plan, k)?.label ?? k}
+          zoneLabel={(k) => zoneLabel(plan, k)}
         />
       ) : null}
       <ConfirmDialog

@@ -1,7 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { getBodyPlan, getZone } from '@/shared/body-plans';
+import { getBodyPlan, zoneLabel } from '@/shared/body-plans';
 import { TIMELINE_KINDS, type TimelineKind } from '@/shared/schemas/recheck';
 import { useTimeline } from '@/src/api/timeline';
 import { useVehicle } from '@/src/api/vehicles';
@@ -47,10 +47,7 @@ export default function Timeline() {
       ) : timeline.isError ? (
         <ErrorView error={timeline.error} onRetry={() => timeline.refetch()} />
       ) : (
-        <TimelineList
-          items={timeline.data}
-          zoneLabel={(k) => (plan && getZone(plan, k)?.label) || k}
-        />
+        <TimelineList items={timeline.data} zoneLabel={(k) => zoneLabel(plan, k)} />
       )}
     </Screen>
   );

@@ -10,8 +10,8 @@ import {
   type ZoneStateCue,
   type ZoneSummary,
 } from '@/src/components/body-diagram';
-import { AppText, Button } from '@/src/components/ui';
-import { colors, radius, spacing } from '@/src/theme';
+import { AppText, Button, Card } from '@/src/components/ui';
+import { spacing } from '@/src/theme';
 
 // Enlarged, a phone-width drawing gets members a fingertip wide; it then scrolls sideways.
 const ZOOM = 2.2;
@@ -58,7 +58,7 @@ export function DiagramPanel({
     />
   );
   return (
-    <View style={styles.card}>
+    <Card style={styles.card}>
       <ViewSwitcher plan={plan} value={view} onChange={onViewChange} />
       <View style={styles.hintRow}>
         <AppText variant="caption" muted style={styles.hint}>
@@ -92,19 +92,12 @@ export function DiagramPanel({
           possible treatment failure.
         </AppText>
       ) : null}
-    </View>
+    </Card>
   );
 }
 
 const styles = StyleSheet.create({
-  card: {
-    gap: spacing.sm,
-    padding: spacing.md,
-    borderRadius: radius.lg,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  card: { padding: spacing.md },
   hintRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   hint: { flex: 1 },
   scroller: { flexGrow: 0 },

@@ -1,4 +1,4 @@
-import { router, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 import {
   getBodyPlan,
   getZone,
@@ -12,6 +12,7 @@ import { useWorkshopSettings } from '@/src/api/workshops';
 import { canDecide } from '@/src/components/decisions/can-decide';
 import { DecisionEditor } from '@/src/components/decisions/decision-editor';
 import { DecisionSummary } from '@/src/components/decisions/decision-summary';
+import { goBack } from '@/src/components/nav/go-back';
 import { AppText, Button, EmptyState, ErrorView, LoadingView, Screen } from '@/src/components/ui';
 import { vehicleTitle } from '@/src/components/vehicles/vehicle-labels';
 import { StructuralCaution } from '@/src/components/wood/structural-caution';
@@ -30,9 +31,7 @@ export default function MemberDecision() {
   const settings = useWorkshopSettings(wid);
   const queries = [vehicle, findings, decisions, settings];
   const back = () =>
-    router.canGoBack()
-      ? router.back()
-      : router.replace({ pathname: '/vehicles/[vehicleId]', params: { vehicleId, zone: zoneKey } });
+    goBack({ pathname: '/vehicles/[vehicleId]', params: { vehicleId, zone: zoneKey } });
 
   if (queries.some((q) => q.isPending)) return <LoadingView label="Loading the member…" />;
   const failed = queries.find((q) => q.isError);

@@ -1,4 +1,4 @@
-import { router, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 import { getBodyPlan } from '@/shared/body-plans';
 import { can } from '@/shared/roles';
 import { cleanError } from '@/src/api/client';
@@ -8,6 +8,7 @@ import { useVehicle } from '@/src/api/vehicles';
 import { useWorkshopSettings } from '@/src/api/workshops';
 import { FindingCard } from '@/src/components/findings/finding-card';
 import { FindingEditor } from '@/src/components/findings/finding-editor';
+import { goBack } from '@/src/components/nav/go-back';
 import { EmptyState, ErrorView, LoadingView, Screen, useToast } from '@/src/components/ui';
 import { vehicleTitle } from '@/src/components/vehicles/vehicle-labels';
 import { useRole, useWorkshopId } from '@/src/hooks/use-session';
@@ -24,8 +25,7 @@ export default function EditFinding() {
   const settings = useWorkshopSettings(wid);
   const restore = useRestoreFinding(wid);
   const toast = useToast();
-  const back = () =>
-    router.canGoBack() ? router.back() : router.replace(`/vehicles/${vehicleId}`);
+  const back = () => goBack(`/vehicles/${vehicleId}`);
 
   if (vehicle.isPending || finding.isPending || surveys.isPending)
     return <LoadingView label="Loading the finding…" />;

@@ -6,6 +6,7 @@ import { useVehicle } from '@/src/api/vehicles';
 import { useWorkshopSettings } from '@/src/api/workshops';
 import { FindingEditor } from '@/src/components/findings/finding-editor';
 import { sortSurveys } from '@/src/components/findings/overview';
+import { goBack } from '@/src/components/nav/go-back';
 import { Button, EmptyState, ErrorView, LoadingView, Screen } from '@/src/components/ui';
 import { vehicleTitle } from '@/src/components/vehicles/vehicle-labels';
 import { useRole, useWorkshopId } from '@/src/hooks/use-session';
@@ -25,8 +26,7 @@ export default function NewFinding() {
   const vehicle = useVehicle(wid, p.vehicleId);
   const surveys = useSurveys(wid, p.vehicleId);
   const settings = useWorkshopSettings(wid);
-  const back = () =>
-    router.canGoBack() ? router.back() : router.replace(`/vehicles/${p.vehicleId}`);
+  const back = () => goBack(`/vehicles/${p.vehicleId}`);
 
   if (vehicle.isPending || surveys.isPending) return <LoadingView label="Opening the form…" />;
   if (vehicle.isError || surveys.isError)

@@ -2,11 +2,12 @@ import { format, parseISO } from 'date-fns';
 import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { Linking, StyleSheet, View } from 'react-native';
-import { getBodyPlan, getZone } from '@/shared/body-plans';
+import { getBodyPlan, zoneLabel } from '@/shared/body-plans';
 import { can } from '@/shared/roles';
 import { RECHECK_STATUS_LABELS } from '@/shared/schemas/recheck';
 import { recheckCalendarUrl, useVehicleRechecks } from '@/src/api/rechecks';
 import { useVehicle } from '@/src/api/vehicles';
+import { goBack } from '@/src/components/nav/go-back';
 import { RecheckAssignee } from '@/src/components/rechecks/recheck-assignee';
 import { RecheckMoveForm } from '@/src/components/rechecks/recheck-move-form';
 import { RecheckResultForm } from '@/src/components/rechecks/recheck-result-form';
@@ -31,8 +32,7 @@ export default function RecheckScreen() {
   const vehicle = useVehicle(wid, p.vehicleId);
   const rechecks = useVehicleRechecks(wid, p.vehicleId);
   const [moving, setMoving] = useState(false);
-  const back = () =>
-    router.canGoBack() ? router.back() : router.replace(`/vehicles/${p.vehicleId}`);
+  const back = () => goBack(`/vehicles/${p.vehicleId}`);
 
   if (vehicle.isPending || rechecks.isPending) return <LoadingView label="Loading the re-check…" />;
   if (vehicle.isError || rechecks.isError)
@@ -55,7 +55,7 @@ export default function RecheckScreen() {
         />
       </Screen>
     );
-  const zones = r.zoneKeys.map((k) => getZone(plan, k)?.label ?? k).join(', ');
+  const zones = r.zoneKeys.map((k) => zoneLabel(plan, k)).join(', ');
   const canWrite = can(role, 'rechecks.write') && r.status === 'pending';
 
   return (

@@ -21,7 +21,6 @@ export default function VehicleReports() {
   const vehicle = useVehicle(wid, vehicleId);
   const reports = useReports(wid, vehicleId);
   const generate = useGenerateReport(wid, vehicleId);
-  const [pending, setPending] = useState<ReportKind | null>(null);
   const [errors, setErrors] = useState<Partial<Record<ReportKind, string>>>({});
 
   if (reports.isPending || vehicle.isPending) return <LoadingView label="Loading the reports…" />;
@@ -38,11 +37,9 @@ export default function VehicleReports() {
   const canWrite = can(role, 'reports.write');
   const canShare = can(role, 'reports.share');
   function start(kind: ReportKind) {
-    setPending(kind);
     setErrors((e) => ({ ...e, [kind]: undefined }));
     generate.mutate(kind, {
       onError: (e) => setErrors((all) => ({ ...all, [kind]: generateError(e) })),
-      onSettled: () => setPending(null),
     });
   }
 
@@ -68,7 +65,7 @@ export default function VehicleReports() {
               kind={kind}
               versions={reports.data.filter((r) => r.kind === kind)}
               onGenerate={canWrite ? () => start(kind) : undefined}
-              generating={pending === kind}
+              generating={generate.isPending && generate.variables === kind}
               error={errors[kind]}
               onShare={
                 canShare

@@ -1,4 +1,4 @@
-import { router, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { getBodyPlan } from '@/shared/body-plans';
 import { createSurveyRequest } from '@/shared/schemas';
@@ -6,6 +6,7 @@ import { can } from '@/shared/roles';
 import { newId } from '@/src/api/ids';
 import { useCreateSurvey } from '@/src/api/surveys';
 import { useVehicle } from '@/src/api/vehicles';
+import { goBack } from '@/src/components/nav/go-back';
 import {
   EmptyState,
   ErrorView,
@@ -27,8 +28,7 @@ export default function NewSurvey() {
   const create = useCreateSurvey(wid, vehicleId);
   // Kept across retries so a repeated save stays one survey.
   const [id] = useState(newId);
-  const back = () =>
-    router.canGoBack() ? router.back() : router.replace(`/vehicles/${vehicleId}`);
+  const back = () => goBack(`/vehicles/${vehicleId}`);
   const form = useFormSubmit(createSurveyRequest, async (body) => {
     await create.mutateAsync({ ...body, id });
     toast.show('Survey started. Tap a zone to log what you find.', { kind: 'success' });

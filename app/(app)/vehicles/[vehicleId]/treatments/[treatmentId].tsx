@@ -1,6 +1,6 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
-import { getBodyPlan, getZone } from '@/shared/body-plans';
+import { getBodyPlan, zoneLabel } from '@/shared/body-plans';
 import { can } from '@/shared/roles';
 import { useVehicleRechecks } from '@/src/api/rechecks';
 import { useTreatment } from '@/src/api/treatments';
@@ -39,7 +39,6 @@ export default function TreatmentScreen() {
   const mine = (rechecks.data ?? [])
     .filter((r) => r.treatmentId === p.treatmentId)
     .sort((a, b) => a.dueDate.localeCompare(b.dueDate));
-  const zoneLabel = (k: string) => (plan && getZone(plan, k)?.label) || k;
 
   return (
     <Screen
@@ -85,7 +84,7 @@ export default function TreatmentScreen() {
             key={r.id}
             recheck={r}
             showVehicle={false}
-            zoneLabel={zoneLabel}
+            zoneLabel={(k) => zoneLabel(plan, k)}
             onPress={() =>
               router.push({
                 pathname: '/vehicles/[vehicleId]/rechecks/[recheckId]',

@@ -13,6 +13,7 @@ import { cleanError } from '@/src/api/client';
 import { useFindings, useRestoreFinding } from '@/src/api/findings';
 import { useVehicle } from '@/src/api/vehicles';
 import { ZoneHistoryList } from '@/src/components/findings/zone-history-list';
+import { goBack } from '@/src/components/nav/go-back';
 import {
   AppText,
   Button,
@@ -68,9 +69,7 @@ export default function ZoneHistory() {
           label="Back to the diagram"
           variant="secondary"
           compact
-          onPress={() =>
-            router.canGoBack() ? router.back() : router.replace(`/vehicles/${vehicleId}`)
-          }
+          onPress={() => goBack(`/vehicles/${vehicleId}`)}
         />
       }
     >
