@@ -1,9 +1,9 @@
 import type { Page } from 'playwright-core';
-import { DEMO_ACCOUNTS } from '@/server/seeders/demo';
 import { correctedMoisture, decayRisk, residualSection, VERDICT_OPTIONS } from '@/shared/wood';
 import { DECAY_RISK_LABELS } from '@/src/components/wood/labels';
 import { launchBrowser, screenshot, type TestBrowser } from './support/browser';
 import { startTestApp, type TestAppServer } from './support/app-server';
+import { centre, signIn, text } from './support/session';
 
 /**
  * The wood-science slice as an inspector uses it, in headless chromium against the production
@@ -13,16 +13,6 @@ import { startTestApp, type TestAppServer } from './support/app-server';
  */
 let app: TestAppServer;
 let browser: TestBrowser;
-
-const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
-
-async function signIn(page: Page, role = 'inspector') {
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByTestId('sign-in-email').fill(account(role).email);
-  await page.getByTestId('sign-in-password').fill(account(role).password);
-  await page.getByTestId('sign-in-submit').click();
-  await page.getByTestId('vehicles-screen').waitFor();
-}
 
 async function openTourerSill(page: Page) {
   await page.locator('[data-testid^="vehicle-row-"]', { hasText: 'Aldermoor' }).first().click();
@@ -34,13 +24,6 @@ async function openTourerSill(page: Page) {
 
 const oneDecimal = (n: number) => `${(Math.round(n * 10) / 10).toFixed(1)} %`;
 const floorPercent = (r: number) => `${Math.floor(r * 100 + 1e-9)} %`;
-const text = async (page: Page, testID: string) =>
-  ((await page.getByTestId(testID).textContent()) ?? '').trim();
-/** The app scrolls inside its own scroll view, so a full-page shot shows the viewport: centre the part first. */
-const centre = (page: Page, testID: string) =>
-  page
-    .getByTestId(testID)
-    .evaluate((el) => el.scrollIntoView({ block: 'center', behavior: 'instant' }));
 
 beforeAll(async () => {
   app = await startTestApp({ prefix: 'decide' });
@@ -57,7 +40,7 @@ let decisionUrl = '';
 describe('inspector on a phone (390×844)', () => {
   it('sees a moisture reading corrected and rated as it is typed', async () => {
     const page = await browser.newPage({ width: 390, height: 844 });
-    await signIn(page);
+    await signIn(page, app.url);
     await openTourerSill(page);
     await page.getByTestId('zone-log-finding').click();
     await page.getByTestId('finding-new-screen').waitFor();
@@ -92,7 +75,7 @@ describe('inspector on a phone (390×844)', () => {
 
   it('decides the left sill: decay depths in, section and recommendation out, an override saved and found after a reload', async () => {
     const page = await browser.newPage({ width: 390, height: 844 });
-    await signIn(page);
+    await signIn(page, app.url);
     await openTourerSill(page);
     await page.getByTestId('zone-decide').click();
     await page.getByTestId('decision-screen').waitFor();
@@ -194,7 +177,7 @@ describe('inspector on a phone (390×844)', () => {
 describe('inspector on a wide screen (1440×900)', () => {
   it('shows the finding form with its moisture panel, and the decision in two columns', async () => {
     const page = await browser.newPage({ width: 1440, height: 900 });
-    await signIn(page);
+    await signIn(page, app.url);
     await openTourerSill(page);
     await page.getByTestId('zone-log-finding').click();
     await page.getByTestId('finding-new-screen').waitFor();
@@ -228,7 +211,7 @@ describe('inspector on a wide screen (1440×900)', () => {
 describe('owner', () => {
   it('changes the scarf slope in the settings, is stopped by a threshold that contradicts another, and finds the change after a reload', async () => {
     const page = await browser.newPage({ width: 390, height: 844 });
-    await signIn(page, 'owner');
+    await signIn(page, app.url, 'owner');
     await page.getByTestId('nav-settings').click();
     await page.getByTestId('settings-screen').waitFor();
     expect(await text(page, 'settings-thresholds')).toMatch(
@@ -258,7 +241,7 @@ describe('owner', () => {
     await page.context().close();
 
     const wide = await browser.newPage({ width: 1440, height: 900 });
-    await signIn(wide, 'owner');
+    await signIn(wide, app.url, 'owner');
     await wide.getByTestId('side-nav-settings').click();
     await wide.getByTestId('settings-screen').waitFor();
     await screenshot(wide, 'decision-wide-05-settings-owner');

@@ -1,10 +1,10 @@
 import crypto from 'node:crypto';
 import fs from 'node:fs';
-import type { Locator, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { waitForMail } from '@/server/mail/outbox';
-import { DEMO_ACCOUNTS } from '@/server/seeders/demo';
 import { launchBrowser, screenshot, type TestBrowser } from './support/browser';
 import { startTestApp, type TestAppServer } from './support/app-server';
+import { account, api, signIn, text } from './support/session';
 
 /**
  * Reports as a workshop hands them over, in headless chromium against the production web export
@@ -21,34 +21,11 @@ let vehicleId = '';
 let token = '';
 let downloaded: Buffer | null = null;
 
-const inspector = DEMO_ACCOUNTS.find((a) => a.role === 'inspector')!;
 const PHONE = { width: 390, height: 844 };
 const WIDE = { width: 1440, height: 900 };
 const BUYER = 'buyer.halloway@example.test';
 const READY = 'Ready';
 const FAILED = 'Could not be prepared';
-
-async function api(method: string, path: string, body?: unknown) {
-  const res = await fetch(`${app.url}${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const json = (await res.json()) as Record<string, unknown>;
-  if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json)}`);
-  return json;
-}
-
-async function signIn(page: Page) {
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByTestId('sign-in-email').fill(inspector.email);
-  await page.getByTestId('sign-in-password').fill(inspector.password);
-  await page.getByTestId('sign-in-submit').click();
-  await page.getByTestId('vehicles-screen').waitFor();
-}
-
-const text = async (scope: Page | Locator, testID: string) =>
-  ((await scope.getByTestId(testID).first().textContent()) ?? '').trim();
 
 /** Waits until the newest version of a kind is ready or failed, and returns its status words. */
 async function settled(page: Page, kind: string) {
@@ -67,13 +44,11 @@ async function settled(page: Page, kind: string) {
 beforeAll(async () => {
   app = await startTestApp({ prefix: 'report' });
   browser = await launchBrowser();
-  const session = await api('POST', '/api/auth/sign-in', {
-    email: inspector.email,
-    password: inspector.password,
-  });
+  const { email, password } = account('inspector');
+  const session = await api(app.url, 'POST', '/api/auth/sign-in', '', { email, password });
   token = session.token as string;
   wid = (session.memberships as { workshopId: string }[])[0].workshopId;
-  const list = await api('GET', `/api/workshops/${wid}/vehicles`);
+  const list = await api(app.url, 'GET', `/api/workshops/${wid}/vehicles`, token);
   vehicleId = (list.items as { id: string; make: string; model: string }[]).find(
     (v) => v.make === 'Aldermoor' && v.model === 'Fourteen Tourer',
   )!.id;
@@ -87,7 +62,7 @@ afterAll(async () => {
 describe('reports and sharing', () => {
   it('an inspector on a phone generates both reports, shares the buyer’s by e-mail, the buyer reads and downloads it, the link is withdrawn', async () => {
     const page = await browser.newPage(PHONE);
-    await signIn(page);
+    await signIn(page, app.url);
     await page.goto(`${app.url}/vehicles/${vehicleId}`);
     await page.getByTestId('vehicle-overview').last().getByTestId('vehicle-reports').click();
     const reports = page.getByTestId('reports-screen').last();
@@ -105,7 +80,12 @@ describe('reports and sharing', () => {
     expect(await text(reports, 'report-facts-repair-scope')).toMatch(/\d+ pages/);
     await screenshot(page, 'report-phone-03-both-ready');
 
-    const listed = await api('GET', `/api/workshops/${wid}/vehicles/${vehicleId}/reports`);
+    const listed = await api(
+      app.url,
+      'GET',
+      `/api/workshops/${wid}/vehicles/${vehicleId}/reports`,
+      token,
+    );
     const buyerReport = (listed.items as { kind: string; sha256: string; shortId: string }[]).find(
       (r) => r.kind === 'condition',
     )!;
@@ -198,7 +178,7 @@ describe('reports and sharing', () => {
   it('at 1440×900: the reports screen, and the verification page checks the downloaded file and a changed copy', async () => {
     expect(downloaded).not.toBeNull();
     const page = await browser.newPage(WIDE);
-    await signIn(page);
+    await signIn(page, app.url);
     await page.goto(`${app.url}/vehicles/${vehicleId}/reports`);
     const reports = page.getByTestId('reports-screen').last();
     await reports.getByTestId('report-grade-repair-scope').waitFor();

@@ -1,8 +1,8 @@
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
-import { DEMO_ACCOUNTS } from '@/server/seeders/demo';
 import { launchBrowser, screenshot, type TestBrowser } from './support/browser';
 import { startTestApp, type TestAppServer } from './support/app-server';
+import { signIn } from './support/session';
 
 /**
  * The survey slice as a person does it, in headless chromium against the production web export
@@ -10,21 +10,6 @@ import { startTestApp, type TestAppServer } from './support/app-server';
  */
 let app: TestAppServer;
 let browser: TestBrowser;
-
-const account = (role: string) => {
-  const a = DEMO_ACCOUNTS.find((x) => x.role === role);
-  if (!a) throw new Error(`no demo ${role}`);
-  return a;
-};
-
-async function signIn(page: Page, role: string) {
-  const { email, password } = account(role);
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill(password);
-  await page.getByTestId('sign-in-submit').click();
-  await page.getByTestId('vehicles-screen').waitFor();
-}
 
 async function openVehicle(page: Page, text: string) {
   await page.locator('[data-testid^="vehicle-row-"]').first().waitFor();
@@ -54,7 +39,7 @@ afterAll(async () => {
 describe('inspector on a phone (390×844)', () => {
   it('logs a finding with frass, severity 3 and a photo on a roof rail and sees it on the diagram and in the history', async () => {
     const page = await browser.newPage({ width: 390, height: 844 });
-    await signIn(page, 'inspector');
+    await signIn(page, app.url, 'inspector');
     await screenshot(page, 'phone-01-vehicles');
     expect(await page.getByTestId('bottom-bar').isVisible()).toBe(true);
 
@@ -147,7 +132,7 @@ describe('inspector on a phone (390×844)', () => {
 describe('inspector on a wide screen (1440×900)', () => {
   it('shows the side navigation, and the diagram and zone sheet side by side', async () => {
     const page = await browser.newPage({ width: 1440, height: 900 });
-    await signIn(page, 'inspector');
+    await signIn(page, app.url, 'inspector');
     expect(await page.getByTestId('side-nav').isVisible()).toBe(true);
     expect(await page.getByTestId('bottom-bar').count()).toBe(0);
     await screenshot(page, 'wide-01-vehicles');
@@ -170,7 +155,7 @@ describe('inspector on a wide screen (1440×900)', () => {
 describe('client (read only)', () => {
   it('sees the shared vehicle with no edit controls, and a direct API write is refused with 403', async () => {
     const page = await browser.newPage({ width: 390, height: 844 });
-    await signIn(page, 'client');
+    await signIn(page, app.url, 'client');
     const rows = page.locator('[data-testid^="vehicle-row-"]');
     await rows.first().waitFor();
     expect(await rows.count()).toBe(1);

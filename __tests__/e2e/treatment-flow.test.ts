@@ -1,8 +1,8 @@
 import { format } from 'date-fns';
-import type { Locator, Page } from 'playwright-core';
-import { DEMO_ACCOUNTS } from '@/server/seeders/demo';
+import type { Page } from 'playwright-core';
 import { launchBrowser, screenshot, type TestBrowser } from './support/browser';
 import { startTestApp, type TestAppServer } from './support/app-server';
+import { account, api, centre, signIn, text } from './support/session';
 
 /**
  * Treatment and re-check monitoring as a workshop lives it, in headless chromium against the
@@ -16,39 +16,11 @@ let app: TestAppServer;
 let browser: TestBrowser;
 let vehicleId = '';
 
-const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 const PHONE = { width: 390, height: 844 };
 const ZONES = ['sill-left', 'lock-pillar-left'];
 // The seed's own treatment (right tonneau rail) has re-checks too: this test's rows name the sill.
 const OWN_ROW = { hasText: /sill/i };
 let seededTreatments = 0;
-
-async function api(method: string, path: string, token: string, body?: unknown) {
-  const res = await fetch(`${app.url}${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const json = (await res.json()) as Record<string, unknown>;
-  if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json)}`);
-  return json;
-}
-
-async function signIn(page: Page, role: string) {
-  await page.goto(`${app.url}/sign-in`);
-  await page.getByTestId('sign-in-email').fill(account(role).email);
-  await page.getByTestId('sign-in-password').fill(account(role).password);
-  await page.getByTestId('sign-in-submit').click();
-  await page.getByTestId('vehicles-screen').waitFor();
-}
-
-const text = async (scope: Page | Locator, testID: string) =>
-  ((await scope.getByTestId(testID).first().textContent()) ?? '').trim();
-const centre = (scope: Page | Locator, testID: string) =>
-  scope
-    .getByTestId(testID)
-    .first()
-    .evaluate((el) => el.scrollIntoView({ block: 'center', behavior: 'instant' }));
 
 /** The vehicle overview opened straight on a zone, so its sheet shows the state and reason. */
 async function openZone(page: Page, zone: string) {
@@ -61,13 +33,13 @@ async function openZone(page: Page, zone: string) {
 beforeAll(async () => {
   app = await startTestApp({ prefix: 'treat' });
   browser = await launchBrowser();
-  const owner = await api('POST', '/api/auth/sign-in', '', {
+  const owner = await api(app.url, 'POST', '/api/auth/sign-in', '', {
     email: account('owner').email,
     password: account('owner').password,
   });
   const token = owner.token as string;
   const wid = (owner.memberships as { workshopId: string }[])[0].workshopId;
-  await api('PATCH', `/api/workshops/${wid}`, token, {
+  await api(app.url, 'PATCH', `/api/workshops/${wid}`, token, {
     settings: {
       treatments: { clearance: { cleanChecksRequired: 2, minSpanDays: 0 } },
     },
@@ -75,12 +47,12 @@ beforeAll(async () => {
   // The seed writes the October survey's findings at start-up; the form records a treatment to
   // the minute, so date them back a day to keep them before it (as they would be in real use).
   await app.sequelize.query('UPDATE findings SET created_at = created_at - INTERVAL 1 DAY');
-  const list = await api('GET', `/api/workshops/${wid}/vehicles`, token);
+  const list = await api(app.url, 'GET', `/api/workshops/${wid}/vehicles`, token);
   vehicleId = (list.items as { id: string; make: string }[]).find(
     (v) => v.make === 'Aldermoor',
   )!.id;
   seededTreatments = (
-    (await api('GET', `/api/workshops/${wid}/vehicles/${vehicleId}/treatments`, token))
+    (await api(app.url, 'GET', `/api/workshops/${wid}/vehicles/${vehicleId}/treatments`, token))
       .items as unknown[]
   ).length;
 }, 120_000);
@@ -93,7 +65,7 @@ afterAll(async () => {
 describe('treatment and re-checks on a phone (390×844)', () => {
   it('an applicator records a treatment on two zones picked on the drawing, confirming the label', async () => {
     const page = await browser.newPage(PHONE);
-    await signIn(page, 'applicator');
+    await signIn(page, app.url, 'applicator');
     // "Due" is the first entry for roles that do re-checks.
     expect(
       await page
@@ -178,7 +150,7 @@ describe('treatment and re-checks on a phone (390×844)', () => {
 
   it('an inspector records clean re-checks until the zone is cleared; fresh frass reopens it, flagged', async () => {
     const page = await browser.newPage(PHONE);
-    await signIn(page, 'inspector');
+    await signIn(page, app.url, 'inspector');
 
     async function openFirstDue() {
       await page.goto(`${app.url}/due`);

@@ -3,6 +3,7 @@ import bcrypt from 'bcryptjs';
 import type { Role } from '@/shared/roles';
 import type { Config } from '@/server/config';
 import { signSessionToken } from '@/server/middleware/auth';
+import type { MemberContext } from '@/server/middleware/workshop';
 import {
   Finding,
   Membership,
@@ -47,6 +48,13 @@ export async function createMember(
   const membership = await Membership.create({ workshopId: workshop.id, userId: user.id, role });
   const token = signSessionToken(config, user.id);
   return { user, membership, token, auth: { Authorization: `Bearer ${token}` } };
+}
+
+/** The context the workshop middleware gives a request by this membership. */
+export function contextOf(
+  m: Pick<Membership, 'id' | 'workshopId' | 'userId' | 'role'>,
+): MemberContext {
+  return { membershipId: m.id, workshopId: m.workshopId, userId: m.userId, role: m.role };
 }
 
 /** A workshop with one member of every role. */

@@ -1,23 +1,12 @@
 import type { Express } from 'express';
 import request from 'supertest';
-import type { MemberContext } from '@/server/middleware/workshop';
 import { Report } from '@/server/models';
 import { collectReportSnapshot } from '@/server/services/report-snapshot';
-import { newShortId } from '@/server/services/reports';
+import { newShortId, nextReportVersion } from '@/server/services/reports';
 import type { ReportKind, ReportResponse } from '@/shared/schemas/report';
-import type { createMember } from './index';
+import { contextOf, type createMember } from './index';
 
 type Member = Awaited<ReturnType<typeof createMember>>;
-
-/** The server-side context of a factory member, as loadMembership would set it. */
-export function contextOf(m: Member): MemberContext {
-  return {
-    membershipId: m.membership.id,
-    workshopId: m.membership.workshopId,
-    userId: m.user.id,
-    role: m.membership.role,
-  };
-}
 
 /** Polls the report until the job is done with it (ready or failed). */
 export async function waitForReport(
@@ -80,13 +69,12 @@ export async function insertQueuedReport(
   vehicleId: string,
   kind: ReportKind = 'repair-scope',
 ) {
-  const snapshot = await collectReportSnapshot(contextOf(member), vehicleId, kind);
-  const last = ((await Report.max('version', { where: { vehicleId, kind } })) as number) ?? 0;
+  const snapshot = await collectReportSnapshot(contextOf(member.membership), vehicleId, kind);
   return Report.create({
     workshopId: member.membership.workshopId,
     vehicleId,
     kind,
-    version: last + 1,
+    version: await nextReportVersion(vehicleId, kind),
     shortId: newShortId(),
     snapshot,
     createdById: member.user.id,
@@ -101,6 +89,10 @@ export async function cloneReadyReport(fromId: string, vehicleId: string) {
   const from = await Report.findByPk(fromId);
   if (from?.status !== 'ready') throw new Error('cloneReadyReport needs a ready report');
   const { id: _id, shortId: _s, createdAt: _c, updatedAt: _u, ...fields } = from.get();
-  const last = (await Report.max('version', { where: { vehicleId, kind: from.kind } })) as number;
-  return Report.create({ ...fields, vehicleId, version: (last ?? 0) + 1, shortId: newShortId() });
+  return Report.create({
+    ...fields,
+    vehicleId,
+    version: await nextReportVersion(vehicleId, from.kind),
+    shortId: newShortId(),
+  });
 }

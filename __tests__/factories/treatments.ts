@@ -1,4 +1,4 @@
-import type { CreateTreatmentRequest } from '@/shared/schemas/treatment';
+import { treatmentData, type CreateTreatmentRequest } from '@/shared/schemas/treatment';
 import { ReCheck, Treatment, type Vehicle } from '@/server/models';
 
 /** A complete POST body for a brushed borate-style treatment of the left sill (invented label). */
@@ -36,29 +36,17 @@ export async function createTreatment(
   partial: Partial<CreateTreatmentRequest> & { dueDates?: string[]; recordedById?: string } = {},
 ) {
   const { dueDates = [], recordedById = null, ...fields } = partial;
-  const { labelConfirmed: _confirmed, id: _id, ...data } = buildTreatment(fields);
+  // Parsed as the service parses a request: defaults filled in, the id and confirmation dropped.
+  const data = treatmentData.parse(buildTreatment(fields));
   const treatment = await Treatment.create({
     workshopId: vehicle.workshopId,
     vehicleId: vehicle.id,
     recordedById,
-    data: {
-      ...data,
-      licenceNumber: data.licenceNumber ?? '',
-      formulation: data.formulation ?? '',
-      dilution: data.dilution ?? '',
-      targetAgent: data.targetAgent ?? 'unknown',
-      areaTreated: data.areaTreated ?? '',
-      ventilation: data.ventilation ?? '',
-      conditions: {
-        airTempC: data.conditions?.airTempC ?? null,
-        woodMoisturePercent: data.conditions?.woodMoisturePercent ?? null,
-      },
-      notes: data.notes ?? '',
-    },
+    data,
     appliedAt: new Date(data.appliedAt),
     zoneKeys: data.zoneKeys,
     method: data.method,
-    targetAgent: data.targetAgent ?? 'unknown',
+    targetAgent: data.targetAgent,
   });
   for (const dueDate of dueDates) await createRecheck(treatment, { dueDate });
   return treatment;

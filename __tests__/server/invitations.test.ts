@@ -1,10 +1,8 @@
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import type { AppDeps } from '@/server/app';
 import { waitForMail } from '@/server/mail/outbox';
-import { startMailSink, type MailSink } from '@/server/mail/sink';
 import { AuditEntry, Invitation, Membership, User } from '@/server/models';
 import { hashInvitationToken } from '@/server/services/invitations';
 import { invitationPreview, sessionResponse } from '@/shared/schemas/auth';
@@ -19,26 +17,18 @@ import {
 } from '../factories';
 import { createInvitation } from '../factories/invitations';
 import { setCookies } from '../factories/sessions';
-import { buildTestApp, type TestApp } from './support/test-app';
+import { buildTestAppWithMail, type TestAppWithMail } from './support/test-app';
 
-let sink: MailSink;
-let mailDir: string;
-let t: TestApp;
+let t: TestAppWithMail;
 beforeAll(async () => {
-  mailDir = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-invite-mail-'));
-  sink = await startMailSink({ port: 0, dir: mailDir });
-  t = buildTestApp({ SMTP_PORT: String(sink.port), MAIL_SINK_DIR: mailDir });
+  t = await buildTestAppWithMail();
 });
 afterEach(() => jest.restoreAllMocks());
-afterAll(async () => {
-  await t.close();
-  await sink.close();
-  fs.rmSync(mailDir, { recursive: true, force: true });
-});
+afterAll(() => t.close());
 
 const invitee = () => `${unique('invitee')}@example.test`;
 const linkTo = (to: string) =>
-  waitForMail(mailDir, (m) => m.to.includes(to)).then((m) => {
+  waitForMail(t.mailDir, (m) => m.to.includes(to)).then((m) => {
     const link = m.links.find((l) => l.includes('/invitation/'));
     if (!link) throw new Error(`no invitation link in: ${m.text}`);
     return { mail: m, link, token: link.slice(link.lastIndexOf('/') + 1) };
@@ -136,7 +126,7 @@ describe('invitation round trip through the SMTP sink', () => {
       .send({ email, role: 'client' })
       .expect(201);
     const firstLink = await linkTo(email);
-    fs.rmSync(path.join(mailDir, `${firstLink.mail.id}.eml`));
+    fs.rmSync(path.join(t.mailDir, `${firstLink.mail.id}.eml`));
     const second = await request(t.app)
       .post(`/api/workshops/${workshop.id}/invitations`)
       .set(owner.auth)

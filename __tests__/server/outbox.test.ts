@@ -1,29 +1,26 @@
-import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { startMailSink, type MailSink } from '@/server/mail/sink';
 import { outboxMessage } from '@/shared/schemas/workshop';
 import { createWorkshopWithTeam, unique } from '../factories';
-import { buildTestApp, type TestApp } from './support/test-app';
+import {
+  buildTestApp,
+  buildTestAppWithMail,
+  type TestApp,
+  type TestAppWithMail,
+} from './support/test-app';
 
 const PRODUCTION = { NODE_ENV: 'production', JWT_SECRET: 'p'.repeat(40) };
 
-let sink: MailSink;
-let mailDir: string;
-let t: TestApp;
+let t: TestAppWithMail;
 const apps: TestApp[] = [];
 beforeAll(async () => {
-  mailDir = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-outbox-'));
-  sink = await startMailSink({ port: 0, dir: mailDir });
-  t = buildTestApp({ SMTP_PORT: String(sink.port), MAIL_SINK_DIR: mailDir });
-  apps.push(t);
+  t = await buildTestAppWithMail();
 });
 // The apps of one file share the models (bound to the newest), so they all close at the end.
 afterAll(async () => {
   for (const a of apps) await a.close();
-  await sink.close();
-  fs.rmSync(mailDir, { recursive: true, force: true });
+  await t.close();
 });
 
 function app(overrides: Record<string, string>) {
@@ -65,7 +62,7 @@ describe('GET /api/dev/outbox', () => {
     ['in production even when OUTBOX_ENABLED=1', { ...PRODUCTION, OUTBOX_ENABLED: '1' }],
     ['with OUTBOX_ENABLED=0', { OUTBOX_ENABLED: '0' }],
   ])('answers a JSON 404 %s', async (_label, overrides) => {
-    const res = await request(app({ ...overrides, MAIL_SINK_DIR: mailDir }))
+    const res = await request(app({ ...overrides, MAIL_SINK_DIR: t.mailDir }))
       .get('/api/dev/outbox')
       .expect(404);
     expect(res.headers['content-type']).toMatch(/application\/json/);

@@ -14,7 +14,11 @@ import { readOutbox, waitForMail } from '@/server/mail/outbox';
 import { startMailSink, type MailSink } from '@/server/mail/sink';
 import { createMailer, type Mailer } from '@/server/mail/transport';
 import { AuditEntry, Membership, ReminderDelivery, User, type Workshop } from '@/server/models';
-import { localDate, runReminderCycle } from '@/server/services/reminders';
+import {
+  localDate,
+  runReminderCycle,
+  type ReminderCycleOptions,
+} from '@/server/services/reminders';
 import { createStorage } from '@/server/storage';
 import { getBodyPlan, getZone } from '@/shared/body-plans';
 import { sessionResponse } from '@/shared/schemas/auth';
@@ -68,6 +72,17 @@ const day = (offset: number) => {
 
 const mailsTo = async (email: string) =>
   (await readOutbox(mailDir, { limit: 10_000 })).filter((m) => m.to.includes(email));
+
+/** One run of the job, as instance 'a' on the first pool with the real mailer unless `over` says otherwise. */
+const cycle = (now: Date, over: Partial<ReminderCycleOptions> = {}) =>
+  runReminderCycle({
+    instanceId: 'a',
+    sequelize: db.sequelize,
+    mailer,
+    publicUrl: PUBLIC_URL,
+    now,
+    ...over,
+  });
 
 /** A treatment and its re-checks, written with raw SQL against the contract's columns. */
 async function seedRechecks(
@@ -212,30 +227,9 @@ describe('two server instances on one database', () => {
     for (let round = 0; round < 8; round++)
       results.push(
         ...(await Promise.all([
-          runReminderCycle({
-            instanceId: 'a',
-            sequelize: db.sequelize,
-            mailer,
-            publicUrl: PUBLIC_URL,
-            now: NOON,
-            batchSize: 3,
-          }),
-          runReminderCycle({
-            instanceId: 'b',
-            sequelize: second,
-            mailer,
-            publicUrl: PUBLIC_URL,
-            now: NOON,
-            batchSize: 3,
-          }),
-          runReminderCycle({
-            instanceId: 'b',
-            sequelize: second,
-            mailer,
-            publicUrl: PUBLIC_URL,
-            now: NOON,
-            batchSize: 3,
-          }),
+          cycle(NOON, { batchSize: 3 }),
+          cycle(NOON, { instanceId: 'b', sequelize: second, batchSize: 3 }),
+          cycle(NOON, { instanceId: 'b', sequelize: second, batchSize: 3 }),
         ])),
       );
 
@@ -273,10 +267,8 @@ describe('failed sends', () => {
     const p = await createMember(db.config, workshop, 'applicator');
     await seedRechecks(workshop, [{ assigneeId: p.user.id, dueDate: day(0) }]);
     const flaky = failingFor(p.user.email, 1);
-    const cycle = (now: Date, sequelize = db.sequelize, instanceId = 'a') =>
-      runReminderCycle({ instanceId, sequelize, mailer: flaky.mailer, publicUrl: PUBLIC_URL, now });
 
-    await cycle(NOON);
+    await cycle(NOON, { mailer: flaky.mailer });
     let [row] = await deliveriesOf(p.user.id);
     expect(row).toMatchObject({ status: 'failed', attempts: 1, claimedBy: 'a' });
     expect(row.lastError).toMatch(/421 mail server busy/);
@@ -284,17 +276,17 @@ describe('failed sends', () => {
     expect(await mailsTo(p.user.email)).toHaveLength(0);
 
     // Before the back-off has passed nothing is tried.
-    await cycle(addSeconds(NOON, 30), second, 'b');
+    await cycle(addSeconds(NOON, 30), { instanceId: 'b', sequelize: second, mailer: flaky.mailer });
     expect(flaky.calls.filter((to) => to === p.user.email)).toHaveLength(1);
 
-    await cycle(addSeconds(NOON, 61), second, 'b');
+    await cycle(addSeconds(NOON, 61), { instanceId: 'b', sequelize: second, mailer: flaky.mailer });
     [row] = await deliveriesOf(p.user.id);
     expect(row).toMatchObject({ status: 'sent', attempts: 2, claimedBy: 'b' });
     expect(row.sentAt).toEqual(addSeconds(NOON, 61));
     expect(row.lastError).toMatch(/421/); // what went wrong on the way stays on record
 
-    await cycle(addMinutes(NOON, 30));
-    await cycle(addMinutes(NOON, 31), second, 'b');
+    await cycle(addMinutes(NOON, 30), { mailer: flaky.mailer });
+    await cycle(addMinutes(NOON, 31), { instanceId: 'b', sequelize: second, mailer: flaky.mailer });
     expect(await mailsTo(p.user.email)).toHaveLength(1);
     expect(await deliveriesOf(p.user.id)).toHaveLength(1);
   });
@@ -304,19 +296,11 @@ describe('failed sends', () => {
     const p = await createMember(db.config, workshop, 'inspector');
     await seedRechecks(workshop, [{ assigneeId: p.user.id, dueDate: day(-2) }]);
     const broken = failingFor(p.user.email);
-    const cycle = (now: Date) =>
-      runReminderCycle({
-        instanceId: 'a',
-        sequelize: db.sequelize,
-        mailer: broken.mailer,
-        publicUrl: PUBLIC_URL,
-        now,
-      });
 
     let at = NOON;
     const waits: number[] = [];
     for (let attempt = 1; attempt <= 5; attempt++) {
-      await cycle(at);
+      await cycle(at, { mailer: broken.mailer });
       const [row] = await deliveriesOf(p.user.id);
       expect(row).toMatchObject({ status: 'failed', attempts: attempt });
       waits.push((row.nextAttemptAt.getTime() - at.getTime()) / 60_000);
@@ -325,7 +309,7 @@ describe('failed sends', () => {
     expect(waits).toEqual([1, 5, 15, 60, 240]);
 
     // Later the same day (NOON + 6 h 21 min): the digest is not tried again.
-    await cycle(addMinutes(at, 60));
+    await cycle(addMinutes(at, 60), { mailer: broken.mailer });
     const rows = await deliveriesOf(p.user.id);
     expect(rows).toHaveLength(1);
     const [row] = rows;
@@ -349,15 +333,6 @@ describe('failed sends', () => {
       claimedAt: NOON,
       recheckIds: ids,
     });
-    const cycle = (now: Date) =>
-      runReminderCycle({
-        instanceId: 'a',
-        sequelize: db.sequelize,
-        mailer,
-        publicUrl: PUBLIC_URL,
-        now,
-      });
-
     await cycle(addMinutes(NOON, 9));
     expect(await row.reload()).toMatchObject({ status: 'sending', claimedBy: 'crashed' });
     await cycle(addMinutes(NOON, 11));
@@ -377,13 +352,7 @@ describe('opting out', () => {
       { assigneeId: out.user.id, dueDate: day(-1) },
       { assigneeId: inn.user.id, dueDate: day(-1) },
     ]);
-    await runReminderCycle({
-      instanceId: 'a',
-      sequelize: db.sequelize,
-      mailer,
-      publicUrl: PUBLIC_URL,
-      now: NOON,
-    });
+    await cycle(NOON);
     expect(await mailsTo(out.user.email)).toHaveLength(0);
     expect(await deliveriesOf(out.user.id)).toHaveLength(0);
     expect(await mailsTo(inn.user.email)).toHaveLength(1);
@@ -394,23 +363,11 @@ describe('opting out', () => {
     const p = await createMember(db.config, workshop, 'applicator');
     await seedRechecks(workshop, [{ assigneeId: p.user.id, dueDate: day(0) }]);
     const flaky = failingFor(p.user.email, 1);
-    await runReminderCycle({
-      instanceId: 'a',
-      sequelize: db.sequelize,
-      mailer: flaky.mailer,
-      publicUrl: PUBLIC_URL,
-      now: NOON,
-    });
+    await cycle(NOON, { mailer: flaky.mailer });
     expect(await deliveriesOf(p.user.id)).toHaveLength(1);
 
     await User.update({ remindersEnabled: false }, { where: { id: p.user.id } });
-    const result = await runReminderCycle({
-      instanceId: 'a',
-      sequelize: db.sequelize,
-      mailer: flaky.mailer,
-      publicUrl: PUBLIC_URL,
-      now: addMinutes(NOON, 2),
-    });
+    const result = await cycle(addMinutes(NOON, 2), { mailer: flaky.mailer });
     expect(result.dropped).toBe(1);
     expect(await deliveriesOf(p.user.id)).toHaveLength(0);
     expect(await mailsTo(p.user.email)).toHaveLength(0);
@@ -457,13 +414,7 @@ describe('PATCH /api/auth/preferences', () => {
 
     // Opted out: the job leaves this person alone.
     await seedRechecks(workshop, [{ assigneeId: me.user.id, dueDate: day(0) }]);
-    await runReminderCycle({
-      instanceId: 'a',
-      sequelize: db.sequelize,
-      mailer,
-      publicUrl: PUBLIC_URL,
-      now: NOON,
-    });
+    await cycle(NOON);
     expect(await mailsTo(me.user.email)).toHaveLength(0);
 
     const on = await request(a)
@@ -472,13 +423,7 @@ describe('PATCH /api/auth/preferences', () => {
       .send({ remindersEnabled: true })
       .expect(200);
     expect(on.body.user.remindersEnabled).toBe(true);
-    await runReminderCycle({
-      instanceId: 'a',
-      sequelize: db.sequelize,
-      mailer,
-      publicUrl: PUBLIC_URL,
-      now: NOON,
-    });
+    await cycle(NOON);
     expect(await mailsTo(me.user.email)).toHaveLength(1);
   });
 

@@ -10,7 +10,6 @@ beforeAll(() => {
   t = buildTestApp({ PUBLIC_URL: 'https://reports.example.test/' });
 });
 afterAll(async () => {
-  await (t.app.locals.reportQueue as { stop(): Promise<void> }).stop();
   await t.close();
 });
 

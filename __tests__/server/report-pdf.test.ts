@@ -5,7 +5,7 @@ import { collectReportSnapshot } from '@/server/services/report-snapshot';
 import { getBodyPlan, getZone, type BodyPlan } from '@/shared/body-plans';
 import { buildRepairScope, type RepairScope, type ReportKind } from '@/shared/reports';
 import type { TestDatabase } from '../e2e/support/test-db';
-import { createMember, createWorkshop } from '../factories';
+import { contextOf, createMember, createWorkshop } from '../factories';
 import {
   flat,
   headingLine,
@@ -84,11 +84,7 @@ describe('collectReportSnapshot', () => {
     const stranger = await createMember(db.config, await createWorkshop(), 'owner');
     for (const m of [client.membership, stranger.membership])
       await expect(
-        collectReportSnapshot(
-          { membershipId: m.id, workshopId: m.workshopId, userId: m.userId, role: m.role },
-          vehicle.id,
-          'repair-scope',
-        ),
+        collectReportSnapshot(contextOf(m), vehicle.id, 'repair-scope'),
       ).rejects.toMatchObject({ status: 404 });
   });
 });

@@ -1,10 +1,6 @@
 import crypto from 'node:crypto';
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import request from 'supertest';
 import { waitForMail } from '@/server/mail/outbox';
-import { startMailSink, type MailSink } from '@/server/mail/sink';
 import { AuditEntry, Report, ReportShare } from '@/server/models';
 import {
   createShareResponse,
@@ -16,28 +12,19 @@ import { createWorkshopWithTeam } from '../factories';
 import { appStorage } from '../factories/photos';
 import { generateReport, insertQueuedReport } from '../factories/reports';
 import { createVehicleScenario } from '../factories/scenario';
-import { buildTestApp, type TestApp } from './support/test-app';
+import { buildTestAppWithMail, type TestAppWithMail } from './support/test-app';
 
-let t: TestApp;
-let sink: MailSink;
-let mailDir: string;
+let t: TestAppWithMail;
 type Scenario = Awaited<ReturnType<typeof createVehicleScenario>>;
 let s: Scenario;
 let report: ReportResponse;
 
 beforeAll(async () => {
-  mailDir = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-share-mail-'));
-  sink = await startMailSink({ port: 0, dir: mailDir });
-  t = buildTestApp({ SMTP_PORT: String(sink.port), MAIL_SINK_DIR: mailDir });
+  t = await buildTestAppWithMail();
   s = await createVehicleScenario(t.config, appStorage(t.app), { shared: true });
   report = await generateReport(t.app, s.inspector, s.vehicle.id, 'condition');
 });
-afterAll(async () => {
-  await (t.app.locals.reportQueue as { stop(): Promise<void> }).stop();
-  await t.close();
-  await sink.close();
-  fs.rmSync(mailDir, { recursive: true, force: true });
-});
+afterAll(() => t.close());
 
 const sha256 = (b: Buffer | string) => crypto.createHash('sha256').update(b).digest('hex');
 const GONE = {
@@ -87,7 +74,7 @@ describe('making a link', () => {
     expect(days).toBeGreaterThan(9.99);
     expect(days).toBeLessThan(10.01);
 
-    const mail = await waitForMail(mailDir, (m) => m.to.includes(email));
+    const mail = await waitForMail(t.mailDir, (m) => m.to.includes(email));
     expect(mail.links).toContain(created.url);
     expect(mail.text).toContain(created.expiresAt.slice(0, 10));
     expect(mail.text).toContain('Here is the report we talked about.');

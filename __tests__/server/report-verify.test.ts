@@ -21,7 +21,6 @@ beforeAll(async () => {
   v1Pdf = (await downloadPdf(t.app, s.inspector, v1)).pdf;
 });
 afterAll(async () => {
-  await (t.app.locals.reportQueue as { stop(): Promise<void> }).stop();
   await limited.close();
   await t.close();
 });

@@ -28,7 +28,6 @@ beforeAll(() => {
   storage = appStorage(t.app);
 });
 afterAll(async () => {
-  await (t.app.locals.reportQueue as { stop(): Promise<void> }).stop();
   await t.close();
 });
 

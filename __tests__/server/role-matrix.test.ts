@@ -1,9 +1,7 @@
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { signSessionToken } from '@/server/middleware/auth';
-import { startMailSink, type MailSink } from '@/server/mail/sink';
 import { AuditEntry } from '@/server/models';
 import type { ReportQueue } from '@/server/jobs/report-queue';
 import type { StorageAdapter } from '@/server/storage';
@@ -26,7 +24,7 @@ import { createInvitation } from '../factories/invitations';
 import { appStorage, createPhoto, jpeg } from '../factories/photos';
 import { cloneReadyReport, generateReport } from '../factories/reports';
 import { buildTreatment, createRecheck, createTreatment } from '../factories/treatments';
-import { buildTestApp, type TestApp } from './support/test-app';
+import { buildTestAppWithMail, type TestAppWithMail } from './support/test-app';
 
 /**
  * Every route of the DEVELOPERS.md API table × every kind of caller. The expected answer follows
@@ -70,29 +68,20 @@ type Row = {
   build: (f: Fixture) => Promise<Req> | Req;
 };
 
-let t: TestApp;
-let sink: MailSink;
-let mailDir: string;
+let t: TestAppWithMail;
 let storage: StorageAdapter;
 let team: Team;
 let unsharedClient: Member;
 let outsider: Member;
 
 beforeAll(async () => {
-  mailDir = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-matrix-mail-'));
-  sink = await startMailSink({ port: 0, dir: mailDir });
-  t = buildTestApp({ SMTP_PORT: String(sink.port), MAIL_SINK_DIR: mailDir });
+  t = await buildTestAppWithMail();
   storage = appStorage(t.app);
   team = await createWorkshopWithTeam(t.config);
   unsharedClient = await createMember(t.config, team.workshop, 'client');
   outsider = (await createWorkshopWithTeam(t.config)).owner;
 });
-afterAll(async () => {
-  await reportQueue().stop();
-  await t.close();
-  await sink.close();
-  fs.rmSync(mailDir, { recursive: true, force: true });
-});
+afterAll(() => t.close());
 
 const reportQueue = () => t.app.locals.reportQueue as ReportQueue;
 

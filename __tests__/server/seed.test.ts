@@ -18,14 +18,13 @@ import {
   Workshop,
 } from '@/server/models';
 import { DEMO_ACCOUNTS, seedDemoIfEmpty } from '@/server/seeders/demo';
-import { classForChosen } from '@/server/services/decisions';
 import { verifyPassword } from '@/server/services/passwords';
 import { readSettings } from '@/server/services/workshops';
 import { createStorage, type StorageAdapter } from '@/server/storage';
 import { getBodyPlan, getZone, polygonCentroid } from '@/shared/body-plans';
 import { treatmentData } from '@/shared/schemas/treatment';
 import { localDate, recheckDueDates, zoneStateItems } from '@/shared/treatments';
-import { assessMember, estimateRepair } from '@/shared/wood';
+import { assessMember, classForChosen, estimateRepair } from '@/shared/wood';
 import { createTestDatabase, type TestDatabase } from '../e2e/support/test-db';
 import { buildTestApp, type TestApp } from './support/test-app';
 
@@ -271,11 +270,9 @@ describe('seedDemoIfEmpty', () => {
           severity: f.severity,
           activity: f.activity,
           insectEvidence: f.insectEvidence,
-          decayType: f.decayType,
         })),
-        treatments: [{ id: treatment.id, appliedAt: data.appliedAt, zoneKeys: data.zoneKeys }],
+        treatments: [{ appliedAt: data.appliedAt, zoneKeys: data.zoneKeys }],
         rechecks: rechecks.map((r) => ({
-          treatmentId: r.treatmentId,
           zoneKeys: r.zoneKeys,
           dueDate: r.dueDate,
           status: r.status,

@@ -2,9 +2,14 @@ import crypto from 'node:crypto';
 import request from 'supertest';
 import { AuditEntry, VehicleAccess } from '@/server/models';
 import { findVehicleFor } from '@/server/services/vehicle-access';
-import type { MemberContext } from '@/server/middleware/workshop';
 import { vehicleAccessResponse } from '@/shared/schemas/vehicle';
-import { createMember, createVehicle, createWorkshopWithTeam, grantAccess } from '../factories';
+import {
+  contextOf,
+  createMember,
+  createVehicle,
+  createWorkshopWithTeam,
+  grantAccess,
+} from '../factories';
 import { buildTestApp, type TestApp } from './support/test-app';
 
 let t: TestApp;
@@ -14,22 +19,18 @@ beforeAll(() => {
 afterAll(() => t.close());
 
 const api = () => request(t.app);
-const ctx = (m: {
-  membership: { id: string; workshopId: string; userId: string; role: MemberContext['role'] };
-}): MemberContext => ({
-  membershipId: m.membership.id,
-  workshopId: m.membership.workshopId,
-  userId: m.membership.userId,
-  role: m.membership.role,
-});
 
 describe('findVehicleFor', () => {
   it('finds a vehicle of the member’s workshop, and one shared with a client', async () => {
     const team = await createWorkshopWithTeam(t.config);
     const v = await createVehicle(team.workshop);
-    await expect(findVehicleFor(ctx(team.applicator), v.id)).resolves.toMatchObject({ id: v.id });
+    await expect(
+      findVehicleFor(contextOf(team.applicator.membership), v.id),
+    ).resolves.toMatchObject({ id: v.id });
     await grantAccess(v, team.client.user.id);
-    await expect(findVehicleFor(ctx(team.client), v.id)).resolves.toMatchObject({ id: v.id });
+    await expect(findVehicleFor(contextOf(team.client.membership), v.id)).resolves.toMatchObject({
+      id: v.id,
+    });
   });
 
   it('answers 404 for another workshop’s vehicle, an unshared one for a client, a deleted one and a bad id', async () => {
@@ -45,16 +46,20 @@ describe('findVehicleFor', () => {
         () => 200,
         (e: { status?: number }) => e.status,
       );
-    expect(await status(findVehicleFor(ctx(team.owner), theirs.id))).toBe(404);
-    expect(await status(findVehicleFor(ctx(team.client), unshared.id))).toBe(404);
-    expect(await status(findVehicleFor(ctx(team.owner), deleted.id))).toBe(404);
+    expect(await status(findVehicleFor(contextOf(team.owner.membership), theirs.id))).toBe(404);
+    expect(await status(findVehicleFor(contextOf(team.client.membership), unshared.id))).toBe(404);
+    expect(await status(findVehicleFor(contextOf(team.owner.membership), deleted.id))).toBe(404);
     expect(
-      await status(findVehicleFor(ctx(team.client), deleted.id, { includeDeleted: true })),
+      await status(
+        findVehicleFor(contextOf(team.client.membership), deleted.id, { includeDeleted: true }),
+      ),
     ).toBe(404);
     expect(
-      await status(findVehicleFor(ctx(team.owner), deleted.id, { includeDeleted: true })),
+      await status(
+        findVehicleFor(contextOf(team.owner.membership), deleted.id, { includeDeleted: true }),
+      ),
     ).toBe(200);
-    expect(await status(findVehicleFor(ctx(team.owner), 'x'))).toBe(404);
+    expect(await status(findVehicleFor(contextOf(team.owner.membership), 'x'))).toBe(404);
   });
 });
 

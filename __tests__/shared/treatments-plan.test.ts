@@ -11,16 +11,7 @@ import {
   treatmentSettingsSchema,
   type TreatmentSettings,
 } from '@/shared/treatments';
-
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof DomainError) return e.field;
-    throw e;
-  }
-  throw new Error('expected a DomainError');
-}
+import { fieldOf } from './support/domain-error';
 
 const withPlan = (over: Partial<TreatmentSettings>): TreatmentSettings => ({
   ...DEFAULT_TREATMENT_SETTINGS,

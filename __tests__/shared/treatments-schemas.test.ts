@@ -3,7 +3,7 @@ import {
   correctTreatmentRequest,
   createTreatmentRequest,
   dueListQuery,
-  mergeTreatmentSettings,
+  mergeSettings,
   moveRecheckRequest,
   recordRecheckRequest,
   timelineQuery,
@@ -186,7 +186,7 @@ describe('workshop treatment settings', () => {
       },
     });
     const merged = treatmentSettingsSchema.parse(
-      mergeTreatmentSettings(DEFAULT_TREATMENT_SETTINGS, body.settings?.treatments),
+      mergeSettings(DEFAULT_TREATMENT_SETTINGS, body.settings?.treatments),
     );
     expect(merged.clearance).toEqual({ cleanChecksRequired: 3, minSpanDays: 400 });
     expect(merged.recheckPlans.fungi).toEqual([60, 120]);

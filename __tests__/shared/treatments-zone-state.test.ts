@@ -20,12 +20,10 @@ const finding = (over: Partial<ZoneFindingInput> = {}): ZoneFindingInput => ({
   severity: 2,
   activity: 'active',
   insectEvidence: ['frass-powder', 'exit-holes-round'],
-  decayType: 'none',
   ...over,
 });
 
 const treatment = (over: Partial<ZoneTreatmentInput> = {}): ZoneTreatmentInput => ({
-  id: 't1',
   appliedAt: TREATED_AT,
   zoneKeys: ['left-sill'],
   ...over,
@@ -40,7 +38,6 @@ const checkAfter = (
 ): ZoneRecheckInput => {
   const at = addDays(new Date(from), days).toISOString();
   return {
-    treatmentId: 't1',
     zoneKeys: ['left-sill'],
     dueDate: at.slice(0, 10),
     status,
@@ -75,7 +72,7 @@ describe('zoneStates before any treatment', () => {
       history({
         findings: [
           finding({ severity: 1, activity: 'inactive', insectEvidence: ['exit-holes-round'] }),
-          finding({ severity: 3, activity: 'unknown', insectEvidence: [], decayType: 'brown-rot' }),
+          finding({ severity: 3, activity: 'unknown', insectEvidence: [] }),
         ],
       }),
     );
@@ -88,7 +85,7 @@ describe('zoneStates before any treatment', () => {
       state: 'active',
       flagged: false,
     });
-    const decay = finding({ insectEvidence: [], decayType: 'brown-rot', severity: 2 });
+    const decay = finding({ insectEvidence: [], severity: 2 });
     expect(stateOf(history({ findings: [decay] })).state).toBe('active');
   });
 
@@ -162,7 +159,7 @@ describe('zoneStates: active → treated → cleared', () => {
   });
 
   it('clean re-checks of an earlier treatment do not count after a new treatment', () => {
-    const second = treatment({ id: 't2', appliedAt: '2027-06-01T08:00:00Z' });
+    const second = treatment({ appliedAt: '2027-06-01T08:00:00Z' });
     const rechecks = [checkAfter(100), checkAfter(200), checkAfter(380)];
     expect(stateOf(history({ ...base, rechecks })).state).toBe('cleared');
     const s = stateOf(history({ ...base, treatments: [treatment(), second], rechecks }));
@@ -222,7 +219,7 @@ describe('zoneStates: fresh evidence after a treatment', () => {
 
   it('a treatment after the fresh evidence puts the zone back under watch, unflagged', () => {
     const fresh = finding({ createdAt: '2026-03-01T10:00:00Z' });
-    const again = treatment({ id: 't2', appliedAt: '2026-03-05T08:00:00Z' });
+    const again = treatment({ appliedAt: '2026-03-05T08:00:00Z' });
     const s = stateOf(
       history({ ...base, findings: [finding(), fresh], treatments: [treatment(), again] }),
     );

@@ -2,12 +2,12 @@ import { INSECT_EVIDENCE } from '@/shared/schemas/finding';
 import {
   AGENT_KEYS,
   AGENT_LABELS,
-  DomainError,
   evidenceFromFinding,
   likelyAgents,
   type AgentEvidence,
   type AgentKey,
 } from '@/shared/wood';
+import { fieldOf } from './support/domain-error';
 
 function ranking(e: AgentEvidence): AgentKey[] {
   return likelyAgents(e).map((c) => c.agent);
@@ -15,16 +15,6 @@ function ranking(e: AgentEvidence): AgentKey[] {
 
 function top(e: AgentEvidence): AgentKey | undefined {
   return ranking(e)[0];
-}
-
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof DomainError) return e.field;
-    throw e;
-  }
-  throw new Error('expected a DomainError');
 }
 
 describe('likelyAgents against Wood Handbook Table 14-2 hole sizes and the extension sources', () => {

@@ -1,21 +1,11 @@
 import {
   DEFAULT_WOOD_SETTINGS,
-  DomainError,
   estimateRepair,
   woodSettingsSchema,
   type RepairEstimateInput,
   type WoodSettings,
 } from '@/shared/wood';
-
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof DomainError) return e.field;
-    throw e;
-  }
-  throw new Error('expected a DomainError');
-}
+import { fieldOf } from './support/domain-error';
 
 const MM_PER_IN = 25.4;
 

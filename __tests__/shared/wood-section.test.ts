@@ -1,7 +1,6 @@
 import * as fc from 'fast-check';
 import {
   boardFeet,
-  DomainError,
   inToMm,
   residualSection,
   roughThicknessQuarters,
@@ -10,16 +9,7 @@ import {
   surfacedThicknessIn,
   type DecayFaces,
 } from '@/shared/wood';
-
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof DomainError) return e.field;
-    throw e;
-  }
-  throw new Error('expected a DomainError');
-}
+import { fieldOf } from './support/domain-error';
 
 const FACES = ['top', 'bottom', 'left', 'right'] as const;
 

@@ -2,23 +2,13 @@ import * as fc from 'fast-check';
 import { STRUCTURAL_CLASSES } from '@/shared/body-plans';
 import {
   DEFAULT_VERDICT_RULES,
-  DomainError,
   recommendVerdict,
   verdictRank,
   verdictRulesSchema,
   type VerdictInput,
   type VerdictRules,
 } from '@/shared/wood';
-
-function fieldOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof DomainError) return e.field;
-    throw e;
-  }
-  throw new Error('expected a DomainError');
-}
+import { fieldOf } from './support/domain-error';
 
 const sound: VerdictInput = {
   structuralClass: 'primary',

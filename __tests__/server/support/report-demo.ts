@@ -16,6 +16,7 @@ import { collectReportSnapshot } from '@/server/services/report-snapshot';
 import { createStorage, type StorageAdapter } from '@/server/storage';
 import type { ReportKind, ReportSnapshot } from '@/shared/reports';
 import { createTestDatabase, type TestDatabase } from '../../e2e/support/test-db';
+import { contextOf } from '../../factories';
 import { pageToPng, pdfText, textLines } from './poppler';
 
 /** What the job passes the renderer as the verification page (PUBLIC_URL + /verify). */
@@ -51,12 +52,7 @@ export async function renderDemoReports(ids: Record<ReportKind, string>): Promis
   const account = DEMO_ACCOUNTS.find((a) => a.role === 'inspector')!;
   const user = await User.findOne({ where: { email: account.email } });
   const m = await Membership.findOne({ where: { userId: user!.id } });
-  const inspector = {
-    membershipId: m!.id,
-    workshopId: m!.workshopId,
-    userId: user!.id,
-    role: m!.role,
-  };
+  const inspector = contextOf(m!);
   const vehicle = (await Vehicle.findOne({
     where: { make: 'Aldermoor', model: 'Fourteen Tourer' },
   }))!;

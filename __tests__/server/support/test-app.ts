@@ -5,6 +5,8 @@ import type { Sequelize } from 'sequelize';
 import { createApp } from '@/server/app';
 import { loadConfig, type Config } from '@/server/config';
 import { createSequelize } from '@/server/db';
+import type { ReportQueue } from '@/server/jobs/report-queue';
+import { startMailSink } from '@/server/mail/sink';
 import { createMailer } from '@/server/mail/transport';
 import { createStorage } from '@/server/storage';
 
@@ -46,10 +48,31 @@ export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
     config,
     sequelize,
     async close() {
+      await (app.locals.reportQueue as ReportQueue).stop();
       mailer.close();
       await sequelize.close();
       if (config.storage.driver === 'local')
         fs.rmSync(config.storage.dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export type TestAppWithMail = TestApp & { mailDir: string };
+
+/** A test app whose mail goes to a sink of its own, in a temp folder that close() removes. */
+export async function buildTestAppWithMail(
+  overrides: Record<string, string> = {},
+): Promise<TestAppWithMail> {
+  const mailDir = fs.mkdtempSync(path.join(os.tmpdir(), 'sf-mail-'));
+  const sink = await startMailSink({ port: 0, dir: mailDir });
+  const t = buildTestApp({ SMTP_PORT: String(sink.port), MAIL_SINK_DIR: mailDir, ...overrides });
+  return {
+    ...t,
+    mailDir,
+    async close() {
+      await t.close();
+      await sink.close();
+      fs.rmSync(mailDir, { recursive: true, force: true });
     },
   };
 }
