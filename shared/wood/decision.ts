@@ -20,6 +20,24 @@ export function classForChosen(
   return structural ? 'structural-must-fix' : 'cosmetic';
 }
 
+/** The estimate for doing `option` to the measured member at the workshop's rates. */
+export function estimateForOption(
+  option: VerdictOption,
+  inputs: DecisionInputs,
+  settings: Pick<WorkshopSettings, 'wood' | 'labourRatePerHour'>,
+) {
+  return estimateRepair({
+    option,
+    widthMm: inputs.widthMm,
+    depthMm: inputs.depthMm,
+    memberLengthMm: inputs.memberLengthMm,
+    affectedLengthMm: inputs.affectedLengthMm,
+    species: inputs.species,
+    settings: settings.wood,
+    labourRatePerHour: settings.labourRatePerHour,
+  });
+}
+
 /**
  * The stored fields of a decision: the rules' recommendation from the measurements and the zone's
  * context, the chosen option (the recommendation unless `choice` differs), its class and its
@@ -35,16 +53,7 @@ export function decisionFields(
   const { verdict } = assessMember(inputs, context, settings.wood);
   const chosen = choice?.option ?? verdict.option;
   const overridden = chosen !== verdict.option;
-  const estimate = estimateRepair({
-    option: chosen,
-    widthMm: inputs.widthMm,
-    depthMm: inputs.depthMm,
-    memberLengthMm: inputs.memberLengthMm,
-    affectedLengthMm: inputs.affectedLengthMm,
-    species: inputs.species,
-    settings: settings.wood,
-    labourRatePerHour: settings.labourRatePerHour,
-  });
+  const estimate = estimateForOption(chosen, inputs, settings);
   return {
     inputs,
     recommendedOption: verdict.option,

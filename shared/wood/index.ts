@@ -49,4 +49,4 @@ export {
 } from './estimate';
 export * from './units';
 export { assessMember, type MemberContext, type MemberMeasurements } from './assess';
-export { classForChosen, decisionFields } from './decision';
+export { classForChosen, decisionFields, estimateForOption } from './decision';

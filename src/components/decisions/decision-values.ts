@@ -9,7 +9,7 @@ import {
 } from '@/shared/schemas';
 import {
   DomainError,
-  estimateRepair,
+  estimateForOption,
   formatLength,
   inToMm,
   mmToIn,
@@ -229,16 +229,7 @@ export function computeDecision(
     settings.wood,
   );
   const option = chosen ?? verdict.option;
-  const estimate = estimateRepair({
-    option,
-    widthMm: inputs.widthMm,
-    depthMm: inputs.depthMm,
-    memberLengthMm: inputs.memberLengthMm,
-    affectedLengthMm: inputs.affectedLengthMm,
-    species: inputs.species,
-    settings: settings.wood,
-    labourRatePerHour: settings.labourRatePerHour,
-  });
+  const estimate = estimateForOption(option, inputs, settings);
   return { inputs, section, verdict, option, overriding: option !== verdict.option, estimate };
 }
 
