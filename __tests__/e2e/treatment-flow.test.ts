@@ -214,10 +214,15 @@ describe('treatment and re-checks on a phone (390×844)', () => {
     await timeline.getByTestId('timeline-filter-survey').click();
     await timeline.getByTestId('timeline-filter-finding').click();
     await timeline.getByTestId('timeline-filter-recheck').click();
+    // Each filter change is its own request: wait until the last answer is on screen.
+    await timeline.getByTestId('timeline-updating').waitFor({ state: 'detached' });
     await page.waitForFunction(
-      () => document.querySelectorAll('[data-testid^="timeline-survey-"]').length === 0,
+      () =>
+        document.querySelector('[data-testid="timeline-list"]') !== null &&
+        document.querySelectorAll('[data-testid^="timeline-survey-"]').length === 0 &&
+        document.querySelectorAll('[data-testid^="timeline-recheck-"]').length === 0,
     );
-    expect(await timeline.locator('[data-testid^="timeline-recheck-"]').count()).toBe(0);
+    expect(await timeline.locator('[data-testid^="timeline-finding-"]').count()).toBe(0);
     expect(await timeline.locator('[data-testid^="timeline-treatment-"]').count()).toBe(
       seededTreatments + 1,
     );

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { timelineItem, type TimelineKind } from '@/shared/schemas/recheck';
 import { request } from './client';
@@ -29,6 +29,10 @@ export const timelineQueries = {
     }),
 };
 
+/** A new filter keeps the previous list on screen (marked as updating) until its answer arrives. */
 export function useTimeline(wid: string, vid: string, kinds: readonly TimelineKind[]) {
-  return useQuery(timelineQueries.vehicle(wid, vid, kinds));
+  return useQuery({
+    ...timelineQueries.vehicle(wid, vid, kinds),
+    placeholderData: keepPreviousData,
+  });
 }

@@ -6,7 +6,7 @@ import { TIMELINE_KINDS, type TimelineKind } from '@/shared/schemas/recheck';
 import { useTimeline } from '@/src/api/timeline';
 import { useVehicle } from '@/src/api/vehicles';
 import { TIMELINE_KIND_LABELS, TimelineList } from '@/src/components/timeline/timeline-list';
-import { ChipToggle, ErrorView, LoadingView, Screen } from '@/src/components/ui';
+import { AppText, ChipToggle, ErrorView, LoadingView, Screen } from '@/src/components/ui';
 import { vehicleTitle } from '@/src/components/vehicles/vehicle-labels';
 import { useWorkshopId } from '@/src/hooks/use-session';
 import { spacing } from '@/src/theme';
@@ -47,7 +47,14 @@ export default function Timeline() {
       ) : timeline.isError ? (
         <ErrorView error={timeline.error} onRetry={() => timeline.refetch()} />
       ) : (
-        <TimelineList items={timeline.data} zoneLabel={(k) => zoneLabel(plan, k)} />
+        <>
+          {timeline.isPlaceholderData ? (
+            <AppText variant="caption" muted testID="timeline-updating">
+              Updating the list…
+            </AppText>
+          ) : null}
+          <TimelineList items={timeline.data} zoneLabel={(k) => zoneLabel(plan, k)} />
+        </>
       )}
     </Screen>
   );
