@@ -3,6 +3,11 @@
 // the services they need; see DEVELOPERS.md.
 const path = require('path');
 
+// Every test runs west of Greenwich, where midnight UTC is the evening before: a day-only date
+// shown through the local clock, or a Date written in local time, fails instead of passing by
+// luck in UTC. Set here (before jest starts its workers) so `npx jest` behaves like `npm test`.
+process.env.TZ = 'America/New_York';
+
 const cacheDirectory = path.join(__dirname, '.jest-cache');
 const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
 const tsJest = [

@@ -20,3 +20,12 @@ export function createSequelize(
   initModels(sequelize);
   return sequelize;
 }
+
+/**
+ * An instant as MariaDB DATETIME text in UTC, for raw `replacements`. Sequelize 6 escapes a Date
+ * in replacements in the process's own time zone and ignores the `timezone` option above, so a
+ * server whose TZ is not UTC would store shifted times. Model queries are not affected.
+ */
+export function sqlInstant(at: Date): string {
+  return at.toISOString().replace('T', ' ').replace('Z', '');
+}

@@ -61,6 +61,26 @@ describe('GET /api/workshops/:wid/vehicles/:vid/timeline', () => {
     expect(treatment.title).toContain('Woodguard Test Concentrate');
     expect(treatment.zoneKeys).toEqual(['sill-left']);
     expect(treatment.at).toBe('2026-09-10T08:00:00.000Z');
+    expect([treatment.allDay, treatment.planned]).toEqual([false, false]);
+
+    // Day-only entries say so, so that no client moves them into another day's clock.
+    const byId = (id: string) => items.find((i: { id: string }) => i.id === id);
+    expect(byId(h.baseline.id)).toMatchObject({ allDay: true, planned: false });
+    expect(byId(h.finding.id)).toMatchObject({ allDay: true, planned: false });
+    expect(byId(h.pending.id)).toMatchObject({
+      allDay: true,
+      planned: true,
+      title: 'Re-check due 22 Oct 2026',
+      zoneKeys: ['sill-left'],
+    });
+    expect(byId(h.done.id)).toMatchObject({
+      allDay: false,
+      planned: false,
+      title: 'Re-check clean',
+      at: '2026-09-25T15:00:00.000Z',
+    });
+    // The zones are in zoneKeys; the detail does not repeat them.
+    expect(byId(h.pending.id).detail).not.toMatch(/sill/i);
   });
 
   it('filters by kind, and answers 400 naming kinds for an unknown one', async () => {

@@ -3,6 +3,7 @@ import { addMinutes, format, parseISO } from 'date-fns';
 import { QueryTypes, Transaction, type Sequelize } from 'sequelize';
 import { getBodyPlan, zoneLabel } from '@/shared/body-plans';
 import { addCalendarDays, localDate } from '@/shared/treatments';
+import { sqlInstant } from '../db';
 import type { Mailer } from '../mail/transport';
 import { ReminderDelivery } from '../models';
 import { describeVehicle } from './vehicle-access';
@@ -162,7 +163,7 @@ async function enqueueDigests(sequelize: Sequelize, now: Date): Promise<number> 
               userId,
               workshopId: w.workshop_id,
               today,
-              now,
+              now: sqlInstant(now),
               ids: JSON.stringify(ids),
             },
           },
@@ -184,7 +185,7 @@ async function expireStaleClaims(sequelize: Sequelize, now: Date): Promise<void>
   // A plain read first (takes no locks), so the common case writes nothing.
   const stale = await sequelize.query<{ id: string }>(
     `SELECT id FROM reminder_deliveries WHERE status = 'sending' AND claimed_at < :staleBefore`,
-    { type: QueryTypes.SELECT, replacements: { staleBefore } },
+    { type: QueryTypes.SELECT, replacements: { staleBefore: sqlInstant(staleBefore) } },
   );
   if (stale.length === 0) return;
   await retryOnDeadlock(() =>
@@ -193,7 +194,13 @@ async function expireStaleClaims(sequelize: Sequelize, now: Date): Promise<void>
           SET status = 'failed', attempts = attempts + 1, next_attempt_at = :now, updated_at = :now,
               last_error = CONCAT('Claimed by ', claimed_by, ' but not finished within ${STALE_CLAIM_MINUTES} minutes')
         WHERE id IN (:ids) AND status = 'sending' AND claimed_at < :staleBefore`,
-      { replacements: { ids: stale.map((s) => s.id), now, staleBefore } },
+      {
+        replacements: {
+          ids: stale.map((s) => s.id),
+          now: sqlInstant(now),
+          staleBefore: sqlInstant(staleBefore),
+        },
+      },
     ),
   );
 }
@@ -225,7 +232,11 @@ async function claimDigests(
             WHERE status IN ('pending', 'failed') AND attempts < :maxAttempts AND next_attempt_at <= :now
             ORDER BY id LIMIT :limit
             FOR UPDATE SKIP LOCKED`,
-          { type: QueryTypes.SELECT, replacements: { maxAttempts, now, limit }, transaction },
+          {
+            type: QueryTypes.SELECT,
+            replacements: { maxAttempts, now: sqlInstant(now), limit },
+            transaction,
+          },
         );
         if (rows.length === 0) return [];
         const ids = rows.map((r) => r.id);
@@ -233,7 +244,7 @@ async function claimDigests(
           `UPDATE reminder_deliveries
               SET status = 'sending', claimed_by = :instanceId, claimed_at = :now, updated_at = :now
             WHERE id IN (:ids)`,
-          { replacements: { instanceId, now, ids }, transaction },
+          { replacements: { instanceId, now: sqlInstant(now), ids }, transaction },
         );
         return sequelize.query<ClaimedRow>(
           `SELECT id, user_id, workshop_id, DATE_FORMAT(digest_date, '%Y-%m-%d') AS digest_date,
@@ -332,8 +343,8 @@ async function deliver(
           ...mine,
           attempts,
           error: (e instanceof Error ? e.message : String(e)).slice(0, 2000),
-          next: addMinutes(now, retryDelayMinutes(attempts)),
-          now,
+          next: sqlInstant(addMinutes(now, retryDelayMinutes(attempts))),
+          now: sqlInstant(now),
         },
       },
     );
@@ -343,7 +354,7 @@ async function deliver(
     `UPDATE reminder_deliveries
         SET status = 'sent', attempts = attempts + 1, sent_at = :now, updated_at = :now
       WHERE ${ownedRow}`,
-    { replacements: { ...mine, now } },
+    { replacements: { ...mine, now: sqlInstant(now) } },
   );
   return 'sent';
 }

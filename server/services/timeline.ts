@@ -7,6 +7,7 @@ import {
   type TimelineKind,
 } from '@/shared/schemas/recheck';
 import { TREATMENT_METHOD_LABELS } from '@/shared/schemas/treatment';
+import { spokenDate } from '@/shared/treatments/dates';
 import type { MemberContext } from '../middleware/workshop';
 import { Finding, ReCheck, Survey, Treatment } from '../models';
 import { findVehicleFor } from './vehicle-access';
@@ -20,6 +21,7 @@ const dayStart = (date: string) => `${date}T00:00:00.000Z`;
 /**
  * Surveys, findings, treatments and re-checks of one vehicle in one list, newest first.
  * Findings are placed on their survey's date; re-checks on the day they were done, or are due.
+ * Day-only entries say so (`allDay`), so a client never shifts them into another day's clock.
  */
 export async function getTimeline(
   member: MemberContext,
@@ -39,6 +41,8 @@ export async function getTimeline(
         kind: 'survey',
         id: s.id,
         at: dayStart(s.date),
+        allDay: true,
+        planned: false,
         title: `Survey (${s.purpose.replace('-', ' ')})`,
         detail: s.notes,
         zoneKeys: [],
@@ -54,6 +58,8 @@ export async function getTimeline(
         kind: 'finding',
         id: f.id,
         at: f.survey ? dayStart(f.survey.date) : f.createdAt.toISOString(),
+        allDay: !!f.survey,
+        planned: false,
         title: `${zone(f.zoneKey)}: ${SEVERITY_LABELS[f.severity]?.title ?? ''} (${f.severity})`,
         detail: [f.activity === 'active' ? 'active' : '', ...seen, f.notes]
           .filter(Boolean)
@@ -68,23 +74,30 @@ export async function getTimeline(
         kind: 'treatment',
         id: t.id,
         at: t.appliedAt.toISOString(),
+        allDay: false,
+        planned: false,
         title: `${TREATMENT_METHOD_LABELS[t.data.method]}: ${t.data.productName}`,
         detail: `${t.data.activeIngredient} ${t.data.concentration}, reg. ${t.data.registrationNumber}; by ${t.data.applicatorName}`,
         zoneKeys: t.zoneKeys,
       });
 
   if (wanted.has('recheck'))
-    for (const r of await ReCheck.findAll({ where }))
+    for (const r of await ReCheck.findAll({ where })) {
+      const pending = r.status === 'pending';
       items.push({
         kind: 'recheck',
         id: r.id,
         at: r.completedAt ? r.completedAt.toISOString() : dayStart(r.dueDate),
-        title: `Re-check ${r.status === 'pending' ? `due ${r.dueDate}` : RECHECK_STATUS_LABELS[r.status as RecheckStatus].toLowerCase()}`,
-        detail: [r.zoneKeys.map(zone).join(', '), r.moveReason && `moved: ${r.moveReason}`, r.notes]
-          .filter(Boolean)
-          .join('; '),
+        allDay: !r.completedAt,
+        planned: pending,
+        title: pending
+          ? `Re-check due ${spokenDate(r.dueDate)}`
+          : `Re-check ${RECHECK_STATUS_LABELS[r.status as RecheckStatus].toLowerCase()}`,
+        // The zones travel in zoneKeys; the detail carries only what they do not say.
+        detail: [r.moveReason && `moved: ${r.moveReason}`, r.notes].filter(Boolean).join('; '),
         zoneKeys: r.zoneKeys,
       });
+    }
 
   return items.sort(
     (a, b) => b.at.localeCompare(a.at) || RANK[a.kind] - RANK[b.kind] || a.id.localeCompare(b.id),

@@ -125,6 +125,10 @@ export const timelineItem = z.object({
   kind: z.enum(TIMELINE_KINDS),
   id: uuid,
   at: isoDateTime,
+  /** `at` stands for a calendar day (a survey date, a due date): show the day, never a clock time. */
+  allDay: z.boolean(),
+  /** Still to be done (a re-check not yet recorded): listed apart from what has happened. */
+  planned: z.boolean(),
   title: z.string(),
   detail: z.string(),
   zoneKeys: z.array(z.string()),

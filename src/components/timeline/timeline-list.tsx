@@ -1,6 +1,7 @@
 import { format } from 'date-fns';
 import { StyleSheet, View } from 'react-native';
 import type { TimelineItem, TimelineKind } from '@/shared/schemas/recheck';
+import { calendarDaysBetween, spokenDate } from '@/shared/treatments/dates';
 import { AppText, Badge, type BadgeTone } from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
 
@@ -17,7 +18,26 @@ const TONES: Record<TimelineKind, BadgeTone> = {
   recheck: 'ok',
 };
 
-/** One vehicle's records, newest first, each with its kind written out. */
+/** When an entry happened: a day for day-only entries (never shifted by the clock), else day and time. */
+export function timelineWhen(item: Pick<TimelineItem, 'at' | 'allDay'>): string {
+  return item.allDay
+    ? spokenDate(item.at.slice(0, 10))
+    : format(new Date(item.at), 'd MMM yyyy, HH:mm');
+}
+
+/** How far off a planned entry is, from the reader's today: "in 12 days", "today", "3 days late". */
+export function timelineDistance(day: string, today: string): string {
+  const days = calendarDaysBetween(today, day);
+  if (days === 0) return 'today';
+  if (days === 1) return 'tomorrow';
+  if (days > 0) return `in ${days} days`;
+  return days === -1 ? '1 day late' : `${-days} days late`;
+}
+
+/**
+ * One vehicle's records: what is still planned first (soonest first), then what has been
+ * recorded (newest first), each entry with its kind written out.
+ */
 export function TimelineList({
   items,
   zoneLabel,
@@ -26,18 +46,55 @@ export function TimelineList({
   zoneLabel(key: string): string;
 }) {
   if (!items.length) return <AppText muted>Nothing recorded of these kinds yet.</AppText>;
+  const planned = items.filter((i) => i.planned).reverse();
+  const recorded = items.filter((i) => !i.planned);
   return (
     <View style={styles.list} testID="timeline-list">
+      {planned.length ? (
+        <Group title="Planned" testID="timeline-planned" items={planned} zoneLabel={zoneLabel} />
+      ) : null}
+      {recorded.length ? (
+        <Group
+          title={planned.length ? 'Recorded' : undefined}
+          testID="timeline-recorded"
+          items={recorded}
+          zoneLabel={zoneLabel}
+        />
+      ) : null}
+    </View>
+  );
+}
+
+function Group({
+  title,
+  items,
+  zoneLabel,
+  testID,
+}: {
+  title?: string;
+  items: TimelineItem[];
+  zoneLabel(key: string): string;
+  testID: string;
+}) {
+  return (
+    <View style={styles.list} testID={testID}>
+      {title ? (
+        <AppText variant="label" accessibilityRole="header">
+          {title}
+        </AppText>
+      ) : null}
       {items.map((item) => (
         <View
           key={`${item.kind}-${item.id}`}
-          style={styles.item}
+          style={[styles.item, item.planned && styles.planned]}
           testID={`timeline-${item.kind}-${item.id}`}
         >
           <View style={styles.head}>
             <Badge label={TIMELINE_KIND_LABELS[item.kind]} tone={TONES[item.kind]} />
             <AppText variant="caption" muted>
-              {format(new Date(item.at), 'd MMM yyyy, HH:mm')}
+              {item.planned
+                ? timelineDistance(item.at.slice(0, 10), format(new Date(), 'yyyy-MM-dd'))
+                : timelineWhen(item)}
             </AppText>
           </View>
           <AppText variant="label">{item.title}</AppText>
@@ -63,5 +120,6 @@ const styles = StyleSheet.create({
     borderColor: colors.line,
     backgroundColor: colors.surface,
   },
+  planned: { borderStyle: 'dashed' },
   head: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, flexWrap: 'wrap' },
 });
