@@ -51,6 +51,7 @@ export function createApp(deps: AppDeps) {
     createReportQueue({
       storage: deps.storage,
       concurrency: config.reports.concurrency,
+      instanceId: config.instanceId,
       verifyUrl: () => (config.publicUrl ? `${config.publicUrl}/verify` : null),
     });
   app.disable('x-powered-by');

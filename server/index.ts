@@ -4,7 +4,7 @@ import { createApp } from './app';
 import { loadConfig, type Config } from './config';
 import { createSequelize } from './db';
 import { startReminderJob } from './jobs/reminder-job';
-import { createReportQueue } from './jobs/report-queue';
+import { createReportQueue, REPORT_STALE_AFTER_MS } from './jobs/report-queue';
 import { createMailer } from './mail/transport';
 import { createStorage } from './storage';
 
@@ -26,6 +26,7 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
   const reportQueue = createReportQueue({
     storage,
     concurrency: config.reports.concurrency,
+    instanceId: config.instanceId,
     verifyUrl: () => (baseUrl ? `${baseUrl}/verify` : null),
   });
   const app = createApp({ config, storage, mailer, reportQueue });
@@ -37,8 +38,13 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
   const port = typeof address === 'object' && address ? address.port : config.port;
   const url = `http://${config.host}:${port}`;
   baseUrl ??= url;
-  // Reports a stopped process left queued or rendering are made now (their inputs are stored).
+  // Reports a stopped process left queued or rendering are made now (their inputs are stored),
+  // and again while running, in case another process sharing the database stops mid-render.
   await reportQueue.recover();
+  const sweep = setInterval(() => {
+    reportQueue.recover().catch((e) => console.error('Report recovery failed:', e));
+  }, REPORT_STALE_AFTER_MS / 2);
+  sweep.unref();
   const reminders = config.reminders.enabled
     ? startReminderJob({ config, sequelize, mailer, publicUrl: config.publicUrl ?? url })
     : null;
@@ -49,6 +55,7 @@ export async function startServer(config: Config, opts: { sequelize?: Sequelize 
     async close() {
       // Let a digest being sent finish (and be recorded) before its connections go.
       await reminders?.stop();
+      clearInterval(sweep);
       // A PDF being rendered is stored before the database goes; waiting ones stay queued.
       await reportQueue.stop();
       const closed = new Promise<void>((resolve) => server.close(() => resolve()));

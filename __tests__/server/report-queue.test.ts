@@ -58,3 +58,42 @@ it('renders, on start-up, the reports a stopped process left queued or rendering
     await server.close();
   }
 });
+
+it('leaves a render another live process is doing alone, and takes over one whose heartbeat went quiet', async () => {
+  const storage = createStorage(db.config.storage);
+  const s = await createVehicleScenario(db.config, storage);
+  const live = await insertQueuedReport(s.owner, s.vehicle.id);
+  const gone = await insertQueuedReport(s.owner, s.vehicle.id, 'condition');
+  const now = Date.now();
+  await live.update({
+    status: 'rendering',
+    progress: 30,
+    startedAt: new Date(now - 5_000),
+    claimedBy: 'other-process-alive',
+    heartbeatAt: new Date(now - 2_000),
+  });
+  await gone.update({
+    status: 'rendering',
+    progress: 60,
+    startedAt: new Date(now - 600_000),
+    claimedBy: 'other-process-gone',
+    // Older than REPORT_STALE_AFTER_MS (60 s).
+    heartbeatAt: new Date(now - 300_000),
+  });
+
+  const server = await startServer(db.config, { sequelize: db.sequelize });
+  try {
+    await until(async () => (await gone.reload()).status === 'ready');
+    expect(gone.claimedBy).not.toBe('other-process-gone');
+    expect((await storage.get(gone.storageKey!))?.subarray(0, 5).toString()).toBe('%PDF-');
+    await live.reload();
+    expect(live).toMatchObject({
+      status: 'rendering',
+      progress: 30,
+      claimedBy: 'other-process-alive',
+    });
+  } finally {
+    await server.close();
+    await live.update({ status: 'failed' });
+  }
+});

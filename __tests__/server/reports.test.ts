@@ -92,8 +92,12 @@ describe('generating a report', () => {
       status: 'ready',
       sha256: sha256(pdf),
       byteSize: pdf.length,
-      storageKey: reportPdfKey(s.workshop.id, ready.id),
     });
+    // One key per render attempt, under the workshop and report.
+    expect(row!.storageKey).toMatch(
+      new RegExp(`^${reportPdfKey(s.workshop.id, ready.id, '[0-9a-f]{8}')}$`),
+    );
+    expect(row!.claimedBy).toBe(t.config.instanceId);
     expect(row!.pageCount).toBeGreaterThanOrEqual(1);
     expect(row!.startedAt!.getTime()).toBeLessThanOrEqual(row!.finishedAt!.getTime());
     // The inputs are frozen on the row: the vehicle and the decision the inspector saw.
@@ -229,6 +233,83 @@ describe('limits', () => {
     expect(row.status).toBe('failed');
     expect(row.error).toContain('the page size is unknown');
     expect(row.sha256).toBeNull();
+  });
+
+  /** A render that waits until the test lets it finish. */
+  function heldRender() {
+    let release!: () => void;
+    const gate = new Promise<void>((r) => (release = r));
+    let started!: () => void;
+    const running = new Promise<void>((r) => (started = r));
+    const render: RenderReport = async (...args) => {
+      started();
+      await gate;
+      return renderReport(...args);
+    };
+    return { render, running, release };
+  }
+
+  it('keeps the heartbeat of a render going while it works, under this process’s claim', async () => {
+    const s = await scenario();
+    const row = await insertQueuedReport(s.owner, s.vehicle.id);
+    const held = heldRender();
+    const queue = createReportQueue({
+      storage,
+      concurrency: 1,
+      instanceId: 'heartbeat-test',
+      heartbeatMs: 50,
+      render: held.render,
+    });
+    queue.enqueue(row.id);
+    await held.running;
+    await row.reload();
+    expect(row).toMatchObject({ status: 'rendering', claimedBy: 'heartbeat-test' });
+    const first = row.heartbeatAt!.getTime();
+    await new Promise((r) => setTimeout(r, 400));
+    await row.reload();
+    expect(row.heartbeatAt!.getTime()).toBeGreaterThan(first);
+    held.release();
+    await queue.idle();
+    await row.reload();
+    expect(row.status).toBe('ready');
+  });
+
+  it('a render whose claim another process took over records nothing and removes its file', async () => {
+    const s = await scenario();
+    const row = await insertQueuedReport(s.owner, s.vehicle.id);
+    const puts: string[] = [];
+    const deletes: string[] = [];
+    const watched: StorageAdapter = {
+      ...storage,
+      put: async (key, body, type) => {
+        puts.push(key);
+        return storage.put(key, body, type);
+      },
+      delete: async (key) => {
+        deletes.push(key);
+        return storage.delete(key);
+      },
+    };
+    const held = heldRender();
+    const queue = createReportQueue({
+      storage: watched,
+      concurrency: 1,
+      instanceId: 'went-quiet',
+      render: held.render,
+    });
+    queue.enqueue(row.id);
+    await held.running;
+    // Meanwhile another process judged this one gone and is rendering the report itself.
+    await Report.update({ claimedBy: 'took-over', progress: 10 }, { where: { id: row.id } });
+    held.release();
+    await queue.idle();
+
+    await row.reload();
+    expect(row).toMatchObject({ status: 'rendering', claimedBy: 'took-over', sha256: null });
+    expect(row.storageKey).toBeNull();
+    expect(puts).toHaveLength(1);
+    expect(deletes).toEqual(puts);
+    expect(await storage.get(puts[0])).toBeNull();
   });
 });
 

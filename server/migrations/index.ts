@@ -5,6 +5,7 @@ import * as treatments from './20261204000000-treatments';
 import * as reminders from './20261205000000-reminders';
 import * as reports from './20261206000000-reports';
 import * as revokedSessions from './20261207000000-revoked-sessions';
+import * as reportClaims from './20261208000000-report-claims';
 
 /** Every migration, in order. Named by timestamp; each has `up` and `down`. */
 export const MIGRATIONS = [
@@ -15,4 +16,5 @@ export const MIGRATIONS = [
   { name: '20261205000000-reminders', ...reminders },
   { name: '20261206000000-reports', ...reports },
   { name: '20261207000000-revoked-sessions', ...revokedSessions },
+  { name: '20261208000000-report-claims', ...reportClaims },
 ];

@@ -48,6 +48,10 @@ export class Report extends Model<InferAttributes<Report>, InferCreationAttribut
   declare updatedAt: CreationOptional<Date>;
   declare startedAt: CreationOptional<Date | null>;
   declare finishedAt: CreationOptional<Date | null>;
+  /** The process rendering it (config.instanceId), while rendering. */
+  declare claimedBy: CreationOptional<string | null>;
+  /** When that process last showed it was still at work. */
+  declare heartbeatAt: CreationOptional<Date | null>;
   declare createdBy?: NonAttribute<User>;
   declare workshop?: NonAttribute<Workshop>;
 
@@ -76,6 +80,8 @@ export class Report extends Model<InferAttributes<Report>, InferCreationAttribut
         updatedAt: DataTypes.DATE(3),
         startedAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
         finishedAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
+        claimedBy: { type: DataTypes.STRING(120), allowNull: true, defaultValue: null },
+        heartbeatAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
       },
       { sequelize, tableName: 'reports' },
     );
