@@ -5,7 +5,6 @@ import { acceptInvitationRequest } from '@/shared/schemas';
 import { ROLE_LABELS } from '@/shared/roles';
 import { authQueries } from '@/src/api/auth';
 import { AuthFrame } from '@/src/components/nav/auth-frame';
-import { formatDay } from '@/src/components/vehicles/vehicle-labels';
 import {
   AppText,
   Button,
@@ -16,6 +15,7 @@ import {
   useFormSubmit,
 } from '@/src/components/ui';
 import { useSession } from '@/src/hooks/use-session';
+import { formatDay } from '@/src/format/dates';
 
 export default function AcceptInvitation() {
   const { token } = useLocalSearchParams<{ token: string }>();

@@ -2,7 +2,6 @@ import { useMemo, useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { BodyPlan, Zone } from '@/shared/body-plans';
 import type { DecisionResponse, FindingResponse, WorkshopSettings } from '@/shared/schemas';
-import { formatWhen } from '@/src/components/findings/labels';
 import { AppText, Button, ConfirmDialog, FormMessage, TextField } from '@/src/components/ui';
 import { CrossSection } from '@/src/components/wood/cross-section';
 import { LengthBar } from '@/src/components/wood/length-bar';
@@ -15,6 +14,7 @@ import { EstimatePanel } from './estimate-panel';
 import { Measurements } from './measurements';
 import { OptionChoice } from './option-choice';
 import { useDecisionForm } from './use-decision-form';
+import { formatMoment } from '@/src/format/dates';
 
 type Props = {
   wid: string;
@@ -149,7 +149,7 @@ export function DecisionEditor({
       {saved ? (
         <AppText variant="caption" muted testID="decision-saved-at">
           Saved{saved.decidedByName ? ` by ${saved.decidedByName}` : ''},{' '}
-          {formatWhen(saved.updatedAt)}
+          {formatMoment(saved.updatedAt)}
           {form.dirty ? ' · unsaved changes' : ''}
         </AppText>
       ) : null}

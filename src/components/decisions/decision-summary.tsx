@@ -1,9 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 import type { DecisionResponse } from '@/shared/schemas';
-import { formatWhen } from '@/src/components/findings/labels';
 import { AppText, Badge } from '@/src/components/ui';
 import { CLASS_LABELS, hours, money, OPTION_LABELS } from '@/src/components/wood/labels';
 import { colors, radius, spacing } from '@/src/theme';
+import { formatMoment } from '@/src/format/dates';
 
 type Props = {
   decision: DecisionResponse;
@@ -50,7 +50,7 @@ export function DecisionSummary({ decision: d, currency, detail = 'brief' }: Pro
       ) : null}
       <AppText variant="caption" muted>
         {d.decidedByName ? `Decided by ${d.decidedByName}, ` : 'Decided '}
-        {formatWhen(d.updatedAt)}
+        {formatMoment(d.updatedAt)}
       </AppText>
     </View>
   );

@@ -2,9 +2,9 @@ import { StyleSheet, View } from 'react-native';
 import { INSECT_EVIDENCE_LABELS, PICK_TEST_LABELS, type FindingResponse } from '@/shared/schemas';
 import { AppText, Badge, Button, Card, SeverityBadge } from '@/src/components/ui';
 import { colors, spacing } from '@/src/theme';
-import { formatDay } from '@/src/components/vehicles/vehicle-labels';
-import { ACTIVITY_LABELS, DECAY_TYPE_LABELS, formatWhen, speciesLabel } from './labels';
+import { ACTIVITY_LABELS, DECAY_TYPE_LABELS, speciesLabel } from './labels';
 import { PhotoThumbs } from './photo-thumbs';
+import { formatDay, formatMoment } from '@/src/format/dates';
 
 type Props = {
   finding: FindingResponse;
@@ -69,7 +69,7 @@ export function FindingCard({ finding: f, detail = 'brief', onEdit, onRestore, r
       <AppText variant="caption" muted>
         Survey of {formatDay(f.surveyDate)}
         {f.authorName ? ` · logged by ${f.authorName}` : ''}
-        {detail === 'full' ? ` · ${formatWhen(f.createdAt)}` : ''}
+        {detail === 'full' ? ` · ${formatMoment(f.createdAt)}` : ''}
       </AppText>
       {onEdit || onRestore ? (
         <View style={styles.actions}>

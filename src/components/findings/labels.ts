@@ -44,16 +44,3 @@ export function speciesLabel(key: string | null | undefined): string {
   if (!key) return '';
   return SPECIES_LABELS[key as SpeciesKey] ?? key;
 }
-
-/** Date and time of a record change, in the reader's conventions. */
-export function formatWhen(iso: string): string {
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return iso;
-  return d.toLocaleString(undefined, {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-  });
-}

@@ -1,9 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 import type { FindingResponse } from '@/shared/schemas';
 import { AppText } from '@/src/components/ui';
-import { formatDay } from '@/src/components/vehicles/vehicle-labels';
 import { spacing } from '@/src/theme';
 import { FindingCard } from './finding-card';
+import { formatDay } from '@/src/format/dates';
 
 /** Newest survey first; within a survey, the latest record first. */
 export function sortHistory(findings: FindingResponse[]): FindingResponse[] {

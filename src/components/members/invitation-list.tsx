@@ -3,8 +3,8 @@ import { ROLE_LABELS } from '@/shared/roles';
 import { cleanError } from '@/src/api/client';
 import { useInvitations, useRevokeInvitation } from '@/src/api/invitations';
 import { AppText, Button, Card, ErrorView, LoadingView, useToast } from '@/src/components/ui';
-import { formatDay } from '@/src/components/vehicles/vehicle-labels';
 import { spacing } from '@/src/theme';
+import { formatDay } from '@/src/format/dates';
 
 /** Invitations not yet accepted, newest first, each revocable. */
 export function InvitationList({ workshopId }: { workshopId: string }) {

@@ -3,6 +3,7 @@ import { Linking, Pressable, StyleSheet, View } from 'react-native';
 import type { OutboxMessage } from '@/shared/schemas';
 import { AppText, Card } from '@/src/components/ui';
 import { colors, spacing } from '@/src/theme';
+import { formatMoment } from '@/src/format/dates';
 
 /** Links to this app open in place (an invitation can be accepted right here); others in a new tab. */
 function open(href: string) {
@@ -17,7 +18,7 @@ export function OutboxMessageCard({ message: m }: { message: OutboxMessage }) {
     <Card testID={`outbox-${m.id}`}>
       <AppText variant="label">{m.subject}</AppText>
       <AppText variant="caption" muted>
-        To {m.to.join(', ')} · {new Date(m.receivedAt).toLocaleString()}
+        To {m.to.join(', ')} · {formatMoment(m.receivedAt)}
       </AppText>
       <AppText selectable style={styles.text}>
         {m.text.trim()}

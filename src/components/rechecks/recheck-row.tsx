@@ -1,8 +1,8 @@
-import { format, parseISO } from 'date-fns';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { RECHECK_STATUS_LABELS, type RecheckResponse } from '@/shared/schemas/recheck';
 import { AppText, Badge, type BadgeTone } from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
+import { formatWeekday } from '@/src/format/dates';
 
 const TONES: Record<RecheckResponse['status'], BadgeTone> = {
   pending: 'neutral',
@@ -23,7 +23,7 @@ export function RecheckRow({
   onPress(): void;
 }) {
   const zones = r.zoneKeys.map((k) => zoneLabel?.(k) ?? k).join(', ');
-  const due = format(parseISO(r.dueDate), 'EEE d MMM yyyy');
+  const due = formatWeekday(r.dueDate);
   return (
     <Pressable
       onPress={onPress}

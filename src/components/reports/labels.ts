@@ -1,4 +1,3 @@
-import { format, parseISO } from 'date-fns';
 import type { ReportKind, ReportStatus, ShareStatus } from '@/shared/schemas/report';
 import type { BadgeTone } from '@/src/components/ui';
 
@@ -35,10 +34,6 @@ export const SHARE_STATUS_TONES: Record<ShareStatus, BadgeTone> = {
   expired: 'neutral',
   revoked: 'danger',
 };
-
-/** parseISO reads a bare date ('2026-10-06') as that local day, where Date would use UTC midnight. */
-export const formatDay = (iso: string) => format(parseISO(iso), 'd MMM yyyy');
-export const formatMoment = (iso: string) => format(parseISO(iso), 'd MMM yyyy, HH:mm');
 
 /** "212 KB", "1.4 MB". */
 export function formatBytes(bytes: number): string {

@@ -7,8 +7,9 @@ import { AppText, Card } from '@/src/components/ui';
 import { hours, money } from '@/src/components/wood/labels';
 import { colors, fonts, spacing } from '@/src/theme';
 import { DownloadLink } from './download-link';
-import { formatBytes, formatDay, pagesLabel, pdfFileName } from './labels';
+import { formatBytes, pagesLabel, pdfFileName } from './labels';
 import { ReportDiagram } from './report-diagram';
+import { formatDay } from '@/src/format/dates';
 
 /** A shared report as its reader sees it: the same numbers the PDF prints, read-only. */
 export function PublicSummary({ share }: { share: PublicShareResponse }) {

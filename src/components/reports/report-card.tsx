@@ -6,7 +6,6 @@ import { colors, spacing } from '@/src/theme';
 import { DownloadLink } from './download-link';
 import {
   formatBytes,
-  formatDay,
   KIND_PURPOSE,
   pagesLabel,
   pdfFileName,
@@ -14,6 +13,7 @@ import {
   STATUS_TONES,
 } from './labels';
 import { ProgressBar } from './progress-bar';
+import { formatDay } from '@/src/format/dates';
 
 type Props = {
   kind: ReportKind;

@@ -5,7 +5,8 @@ import { cleanError } from '@/src/api/client';
 import { useRevokeShare, useShares } from '@/src/api/reports';
 import { AppText, Badge, Button, ConfirmDialog, ErrorView, useToast } from '@/src/components/ui';
 import { colors, spacing } from '@/src/theme';
-import { formatDay, formatMoment, SHARE_STATUS_LABELS, SHARE_STATUS_TONES } from './labels';
+import { SHARE_STATUS_LABELS, SHARE_STATUS_TONES } from './labels';
+import { formatDay, formatMoment } from '@/src/format/dates';
 
 /** Every link made for one report: who it went to, until when, how often it was opened. */
 export function ShareList({

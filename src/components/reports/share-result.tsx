@@ -4,7 +4,7 @@ import type { CreateShareResponse } from '@/shared/schemas/report';
 import { AppText, Button } from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
 import { copyText } from './copy-text';
-import { formatDay } from './labels';
+import { formatDay } from '@/src/format/dates';
 
 /** The new link (shown only now: the server keeps its hash), with Copy and the e-mail outcome. */
 export function ShareResult({ share, onDone }: { share: CreateShareResponse; onDone: () => void }) {

@@ -3,7 +3,7 @@ import Svg, { Circle, Path } from 'react-native-svg';
 import { REPORT_KIND_LABELS, type VerifyResponse } from '@/shared/schemas/report';
 import { AppText } from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
-import { formatDay } from './labels';
+import { formatDay } from '@/src/format/dates';
 
 type Outcome = 'genuine' | 'known-id' | 'changed' | 'not-the-file' | 'unknown-id';
 export type CheckedBy = 'file' | 'id';

@@ -1,9 +1,9 @@
-import { format } from 'date-fns';
 import { StyleSheet, View } from 'react-native';
 import type { TimelineItem, TimelineKind } from '@/shared/schemas/recheck';
-import { calendarDaysBetween, spokenDate } from '@/shared/treatments/dates';
+import { calendarDaysBetween } from '@/shared/treatments/dates';
 import { AppText, Badge, type BadgeTone } from '@/src/components/ui';
 import { colors, radius, spacing } from '@/src/theme';
+import { formatDay, formatMoment, todayLocal } from '@/src/format/dates';
 
 export const TIMELINE_KIND_LABELS: Record<TimelineKind, string> = {
   survey: 'Survey',
@@ -20,9 +20,7 @@ const TONES: Record<TimelineKind, BadgeTone> = {
 
 /** When an entry happened: a day for day-only entries (never shifted by the clock), else day and time. */
 export function timelineWhen(item: Pick<TimelineItem, 'at' | 'allDay'>): string {
-  return item.allDay
-    ? spokenDate(item.at.slice(0, 10))
-    : format(new Date(item.at), 'd MMM yyyy, HH:mm');
+  return item.allDay ? formatDay(item.at.slice(0, 10)) : formatMoment(item.at);
 }
 
 /** How far off a planned entry is, from the reader's today: "in 12 days", "today", "3 days late". */
@@ -93,7 +91,7 @@ function Group({
             <Badge label={TIMELINE_KIND_LABELS[item.kind]} tone={TONES[item.kind]} />
             <AppText variant="caption" muted>
               {item.planned
-                ? timelineDistance(item.at.slice(0, 10), format(new Date(), 'yyyy-MM-dd'))
+                ? timelineDistance(item.at.slice(0, 10), todayLocal())
                 : timelineWhen(item)}
             </AppText>
           </View>

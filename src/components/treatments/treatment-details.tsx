@@ -1,4 +1,3 @@
-import { format } from 'date-fns';
 import { StyleSheet, View } from 'react-native';
 import { zoneLabel, type BodyPlan } from '@/shared/body-plans';
 import {
@@ -8,6 +7,7 @@ import {
 } from '@/shared/schemas/treatment';
 import { AppText, Card } from '@/src/components/ui';
 import { colors, spacing } from '@/src/theme';
+import { formatDay, formatMoment } from '@/src/format/dates';
 
 /** What was applied, where and under which label; earlier versions listed with their reasons. */
 export function TreatmentDetails({
@@ -19,7 +19,7 @@ export function TreatmentDetails({
 }) {
   const zones = t.zoneKeys.map((k) => zoneLabel(plan, k)).join(', ');
   const rows: [string, string][] = [
-    ['Applied', format(new Date(t.appliedAt), 'd MMM yyyy, HH:mm')],
+    ['Applied', formatMoment(t.appliedAt)],
     ['Applied by', t.applicatorName + (t.licenceNumber ? ` (licence ${t.licenceNumber})` : '')],
     ['Zones', zones],
     ['Product', t.productName],
@@ -68,7 +68,7 @@ export function TreatmentDetails({
           {t.versions.map((v) => (
             <Card key={v.version}>
               <AppText variant="label">
-                Version {v.version}, replaced {format(new Date(v.changedAt), 'd MMM yyyy')} by{' '}
+                Version {v.version}, replaced {formatDay(v.changedAt)} by{' '}
                 {v.changedByName ?? 'unknown'}
               </AppText>
               <AppText variant="caption">Reason: {v.reason}</AppText>

@@ -2,7 +2,8 @@ import { StyleSheet, View } from 'react-native';
 import type { VehicleResponse } from '@/shared/schemas';
 import { AppText, Badge, Button, Card, SeverityBadge } from '@/src/components/ui';
 import { spacing } from '@/src/theme';
-import { bodyPlanName, formatDay, STAGE_LABELS, STAGE_TONES, vehicleTitle } from './vehicle-labels';
+import { bodyPlanName, STAGE_LABELS, STAGE_TONES, vehicleTitle } from './vehicle-labels';
+import { formatDay } from '@/src/format/dates';
 
 type Props = {
   vehicle: VehicleResponse;

@@ -1,8 +1,8 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
 import type { SurveyPurpose, SurveyResponse } from '@/shared/schemas';
 import { AppText, Button, ChipToggle } from '@/src/components/ui';
-import { formatDay } from '@/src/components/vehicles/vehicle-labels';
 import { spacing } from '@/src/theme';
+import { formatDay } from '@/src/format/dates';
 
 export const SURVEY_PURPOSE_SHORT: Record<SurveyPurpose, string> = {
   baseline: 'Baseline',

@@ -7,8 +7,9 @@ import {
   type VehicleResponse,
 } from '@/shared/schemas';
 import { AppText, Badge } from '@/src/components/ui';
-import { STAGE_LABELS, STAGE_TONES, formatDay } from '@/src/components/vehicles/vehicle-labels';
+import { STAGE_LABELS, STAGE_TONES } from '@/src/components/vehicles/vehicle-labels';
 import { colors, radius, severityFill, severityInk, spacing } from '@/src/theme';
+import { formatDay } from '@/src/format/dates';
 
 /** Plan, stage and client under the title, then open findings counted by severity. */
 export function VehicleFacts({

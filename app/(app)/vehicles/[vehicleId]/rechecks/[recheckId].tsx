@@ -1,4 +1,3 @@
-import { format, parseISO } from 'date-fns';
 import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { Linking, StyleSheet, View } from 'react-native';
@@ -23,6 +22,7 @@ import {
 import { vehicleTitle } from '@/src/components/vehicles/vehicle-labels';
 import { useRole, useWorkshopId } from '@/src/hooks/use-session';
 import { spacing } from '@/src/theme';
+import { formatDay, formatLongDay } from '@/src/format/dates';
 
 /** One re-check: what is due where, its calendar file, and recording the result or moving it. */
 export default function RecheckScreen() {
@@ -62,7 +62,7 @@ export default function RecheckScreen() {
     <Screen title="Re-check" subtitle={vehicleTitle(vehicle.data)} testID="recheck-screen">
       <Card>
         <AppText variant="label" testID="recheck-due">
-          Due {format(parseISO(r.dueDate), 'EEEE d MMMM yyyy')}
+          Due {formatLongDay(r.dueDate)}
         </AppText>
         <AppText testID="recheck-zones">{zones}</AppText>
         <AppText variant="caption" muted>
@@ -71,7 +71,7 @@ export default function RecheckScreen() {
         <AppText variant="caption" testID="recheck-status">
           {RECHECK_STATUS_LABELS[r.status]}
           {r.completedAt
-            ? `, ${format(new Date(r.completedAt), 'd MMM yyyy')} by ${r.completedByName ?? 'unknown'}`
+            ? `, ${formatDay(r.completedAt)} by ${r.completedByName ?? 'unknown'}`
             : ''}
         </AppText>
         {r.moveReason ? (

@@ -4,13 +4,14 @@ import { can } from '@/shared/roles';
 import { REPORT_KIND_LABELS } from '@/shared/schemas/report';
 import { useReport } from '@/src/api/reports';
 import { DownloadLink } from '@/src/components/reports/download-link';
-import { formatDay, pdfFileName, STATUS_LABELS } from '@/src/components/reports/labels';
+import { pdfFileName, STATUS_LABELS } from '@/src/components/reports/labels';
 import { ShareForm } from '@/src/components/reports/share-form';
 import { ShareList } from '@/src/components/reports/share-list';
 import { AppText, ErrorView, LoadingView, Screen } from '@/src/components/ui';
 import { useBreakpoint } from '@/src/hooks/use-breakpoint';
 import { useRole, useWorkshopId } from '@/src/hooks/use-session';
 import { spacing } from '@/src/theme';
+import { formatDay } from '@/src/format/dates';
 
 /** One report version: its download, a form to share it and the links already made. */
 export default function ReportScreen() {
