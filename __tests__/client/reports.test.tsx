@@ -230,7 +230,9 @@ describe('share screen', () => {
     expect(await screen.findByTestId(`share-row-${shares[0].id}`)).toHaveTextContent(
       /buyer@example.test/,
     );
-    expect(screen.getByTestId(`share-views-${shares[0].id}`)).toHaveTextContent('Opened 0 times');
+    expect(screen.getByTestId(`share-views-${shares[0].id}`)).toHaveTextContent(
+      'Opened 0 times · PDF not downloaded',
+    );
     // No clipboard on native: the link stays on screen to be copied by hand.
     fireEvent.press(screen.getByTestId('share-copy'));
     expect(await screen.findByTestId('share-copy-fallback')).toBeTruthy();
@@ -241,6 +243,7 @@ describe('share screen', () => {
       reportId: report.id,
       viewCount: 3,
       lastViewedAt: '2026-11-21T10:15:00.000Z',
+      downloadCount: 1,
     });
     serveShares(() => [share]);
     const base = mockRequest.getMockImplementation()!;
@@ -254,7 +257,7 @@ describe('share screen', () => {
     });
     render(<ReportScreen />, { wrapper: TestProviders });
     expect(await screen.findByTestId(`share-views-${share.id}`)).toHaveTextContent(
-      /Opened 3 times, last on 21 Nov 2026/,
+      /^Opened 3 times, last on 21 Nov 2026, 05:15 · PDF downloaded once$/,
     );
     fireEvent.press(screen.getByTestId(`share-revoke-${share.id}`));
     expect(screen.getByTestId('confirm-dialog')).toHaveTextContent(

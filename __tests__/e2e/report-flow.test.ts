@@ -146,12 +146,13 @@ describe('reports and sharing', () => {
     await screenshot(wideBuyer, 'report-wide-00-public-summary');
     await wideBuyer.context().close();
 
-    // Back as the inspector: the view was counted; withdraw the link, with the confirm step.
+    // Back as the inspector: the views and the one download were counted; withdraw the link,
+    // with the confirm step.
     await page.reload();
     const again = page.getByTestId('report-screen').last();
     await again.locator('[data-testid^="share-views-"]').first().waitFor();
     expect(await again.locator('[data-testid^="share-views-"]').first().textContent()).toMatch(
-      /Opened (once|\d+ times)/,
+      /Opened (once|\d+ times).* · PDF downloaded once$/,
     );
     await again.locator('[data-testid^="share-revoke-"]').first().click();
     await page.getByTestId('confirm-ok').click();

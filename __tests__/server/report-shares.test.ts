@@ -142,8 +142,13 @@ describe('opening a link without an account', () => {
     expect(pdf.status).toBe(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     expect(sha256(pdf.body as Buffer)).toBe(report.sha256);
-    // Downloading is not a view of the page.
-    expect((await ReportShare.findByPk(id))!.viewCount).toBe(3);
+    // Downloading is not a view of the page; it is counted on its own.
+    const after = (await ReportShare.findByPk(id))!;
+    expect(after.viewCount).toBe(3);
+    expect(after.downloadCount).toBe(1);
+    expect(after.lastDownloadedAt).not.toBeNull();
+    await openPdf(token).expect(200);
+    expect((await ReportShare.findByPk(id))!.downloadCount).toBe(2);
   });
 
   it('tells an older version’s reader that a newer one exists', async () => {

@@ -6,6 +6,7 @@ import * as reminders from './20261205000000-reminders';
 import * as reports from './20261206000000-reports';
 import * as revokedSessions from './20261207000000-revoked-sessions';
 import * as reportClaims from './20261208000000-report-claims';
+import * as shareDownloads from './20261209000000-share-downloads';
 
 /** Every migration, in order. Named by timestamp; each has `up` and `down`. */
 export const MIGRATIONS = [
@@ -17,4 +18,5 @@ export const MIGRATIONS = [
   { name: '20261206000000-reports', ...reports },
   { name: '20261207000000-revoked-sessions', ...revokedSessions },
   { name: '20261208000000-report-claims', ...reportClaims },
+  { name: '20261209000000-share-downloads', ...shareDownloads },
 ];

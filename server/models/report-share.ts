@@ -28,6 +28,8 @@ export class ReportShare extends Model<
   declare revokedById: ForeignKey<User['id']> | null;
   declare viewCount: CreationOptional<number>;
   declare lastViewedAt: CreationOptional<Date | null>;
+  declare downloadCount: CreationOptional<number>;
+  declare lastDownloadedAt: CreationOptional<Date | null>;
   declare emailedAt: CreationOptional<Date | null>;
   declare createdById: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
@@ -46,6 +48,8 @@ export class ReportShare extends Model<
         revokedAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
         viewCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         lastViewedAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
+        downloadCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        lastDownloadedAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
         emailedAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),

@@ -46,6 +46,8 @@ export function toShareResponse(s: ReportShare): ShareResponse {
     status: shareStatus(s),
     viewCount: s.viewCount,
     lastViewedAt: s.lastViewedAt ? s.lastViewedAt.toISOString() : null,
+    downloadCount: s.downloadCount,
+    lastDownloadedAt: s.lastDownloadedAt ? s.lastDownloadedAt.toISOString() : null,
     emailedAt: s.emailedAt ? s.emailedAt.toISOString() : null,
     createdByName: s.createdBy?.name ?? null,
     createdAt: s.createdAt.toISOString(),
@@ -254,9 +256,15 @@ export async function openShare(token: string): Promise<PublicShareResponse> {
   };
 }
 
+/** The PDF behind a link; a download that could be served is counted (one atomic UPDATE). */
 export async function sharedPdf(token: string, storage: StorageAdapter) {
-  const { report } = await usableShare(token);
-  return readReportPdf(report, storage).catch(() => {
+  const { share, report } = await usableShare(token);
+  const pdf = await readReportPdf(report, storage).catch(() => {
     throw linkNotAvailable();
   });
+  await ReportShare.update(
+    { downloadCount: literal('download_count + 1'), lastDownloadedAt: new Date() },
+    { where: { id: share.id } },
+  );
+  return pdf;
 }

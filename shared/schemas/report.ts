@@ -133,6 +133,9 @@ export const shareResponse = z.object({
   status: z.enum(SHARE_STATUSES),
   viewCount: z.number(),
   lastViewedAt: isoDateTime.nullable(),
+  /** Downloads of the PDF through the link (the page and the file are counted apart). */
+  downloadCount: z.number(),
+  lastDownloadedAt: isoDateTime.nullable(),
   emailedAt: isoDateTime.nullable(),
   createdByName: z.string().nullable(),
   createdAt: isoDateTime,

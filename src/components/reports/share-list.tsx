@@ -58,6 +58,10 @@ export function ShareList({
           <AppText variant="caption" testID={`share-views-${s.id}`}>
             {s.viewCount === 1 ? 'Opened once' : `Opened ${s.viewCount} times`}
             {s.lastViewedAt ? `, last on ${formatMoment(s.lastViewedAt)}` : ''}
+            {' · '}
+            {s.downloadCount === 0
+              ? 'PDF not downloaded'
+              : `PDF downloaded ${s.downloadCount === 1 ? 'once' : `${s.downloadCount} times`}`}
           </AppText>
           {canRevoke && s.status === 'active' ? (
             <Button
