@@ -44,6 +44,16 @@ describe('inspector on a phone (390×844)', () => {
     expect(await page.getByTestId('bottom-bar').isVisible()).toBe(true);
 
     await openVehicle(page, 'Heathland');
+    // The header's buttons wrap on a phone: none of them runs past the screen's edge.
+    for (const id of [
+      'vehicle-record-treatment',
+      'vehicle-reports',
+      'vehicle-timeline',
+      'vehicle-edit',
+    ]) {
+      const box = (await page.getByTestId(id).boundingBox())!;
+      expect(box.x + box.width).toBeLessThanOrEqual(390);
+    }
     await page.getByTestId('view-left').click();
     const zone = page.getByTestId('zone-roof-rail-left');
     await zone.waitFor();

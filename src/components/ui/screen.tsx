@@ -77,5 +77,12 @@ const styles = StyleSheet.create({
     gap: spacing.md,
   },
   titles: { flexShrink: 1, minWidth: 200, gap: spacing.xs },
-  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  // Shrinks to the page so its buttons wrap on a phone instead of running off the edge.
+  actions: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    gap: spacing.sm,
+    flexShrink: 1,
+    maxWidth: '100%',
+  },
 });

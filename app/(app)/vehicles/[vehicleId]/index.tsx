@@ -171,7 +171,7 @@ export default function VehicleOverview() {
       maxWidth={wide ? 1400 : 880}
       testID="vehicle-overview"
       actions={
-        <View style={styles.actions}>
+        <>
           {canTreat ? (
             <Button
               label="Record a treatment"
@@ -204,7 +204,7 @@ export default function VehicleOverview() {
               testID="vehicle-edit"
             />
           ) : null}
-        </View>
+        </>
       }
     >
       <VehicleFacts vehicle={v} plan={plan} findings={findings.data ?? []} />
@@ -289,7 +289,6 @@ function centroidIn(plan: BodyPlan, view: ViewKey, zone: string): ViewPoint | un
 }
 
 const styles = StyleSheet.create({
-  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   split: { gap: spacing.lg },
   splitWide: { flexDirection: 'row', alignItems: 'flex-start' },
   diagramWide: { flex: 3, minWidth: 0 },
