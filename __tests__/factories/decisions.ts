@@ -64,3 +64,17 @@ export async function createDecision(
     ...partial,
   });
 }
+
+/** A structural must-fix decision to replace the left sill: 6 h, 300 labour + 80 timber = 380. */
+export function createStructuralDecision(vehicle: Vehicle, zoneKey = 'sill-left') {
+  return createDecision(vehicle, {
+    zoneKey,
+    chosenOption: 'replace-member',
+    recommendedOption: 'replace-member',
+    decisionClass: 'structural-must-fix',
+    estimatedHours: 6,
+    labourCost: 300,
+    materialCost: 80,
+    totalCost: 380,
+  });
+}

@@ -8,7 +8,7 @@ import type { StorageAdapter } from '@/server/storage';
 import { z } from 'zod';
 import { reportResponse, SHORT_ID_PATTERN } from '@/shared/schemas/report';
 import { createMember, createWorkshopWithTeam } from '../factories';
-import { createDecision } from '../factories/decisions';
+import { createStructuralDecision } from '../factories/decisions';
 import { appStorage } from '../factories/photos';
 import {
   downloadPdf,
@@ -34,16 +34,7 @@ afterAll(async () => {
 /** A shared vehicle with a finding, its photo, and a structural member decision on that zone. */
 async function scenario(): Promise<Scenario> {
   const s = await createVehicleScenario(t.config, storage, { shared: true });
-  await createDecision(s.vehicle, {
-    zoneKey: 'sill-left',
-    chosenOption: 'replace-member',
-    recommendedOption: 'replace-member',
-    decisionClass: 'structural-must-fix',
-    estimatedHours: 6,
-    labourCost: 300,
-    materialCost: 80,
-    totalCost: 380,
-  });
+  await createStructuralDecision(s.vehicle);
   return s;
 }
 

@@ -466,6 +466,16 @@ const ROUTES: Row[] = [
     },
   },
   {
+    route: 'GET /api/workshops/:wid/vehicles/:vid/repair-plan',
+    needs: 'vehicles.read',
+    vehicle: true,
+    ok: 200,
+    build: async (f) => {
+      await createDecision(f.vehicle);
+      return { url: `${f.w}/vehicles/${f.vehicle.id}/repair-plan` };
+    },
+  },
+  {
     route: 'GET /api/workshops/:wid/vehicles/:vid/decisions/:zoneKey',
     needs: 'vehicles.read',
     vehicle: true,

@@ -3,6 +3,7 @@ import { saveDecisionRequest } from '@/shared/schemas/decision';
 import { validate } from '../middleware/validate';
 import { memberOf, requireAction } from '../middleware/workshop';
 import * as decisions from '../services/decisions';
+import { getRepairPlan } from '../services/repair-plan';
 
 /** One member decision per zone of a vehicle; reads follow the vehicle's visibility. */
 export function decisionRoutes() {
@@ -14,6 +15,14 @@ export function decisionRoutes() {
       items: await decisions.listDecisions(memberOf(res), String(req.params.vehicleId)),
     });
   });
+
+  router.get(
+    '/vehicles/:vehicleId/repair-plan',
+    requireAction('vehicles.read'),
+    async (req, res) => {
+      res.json(await getRepairPlan(memberOf(res), String(req.params.vehicleId)));
+    },
+  );
 
   router.get(one, requireAction('vehicles.read'), async (req, res) => {
     res.json(

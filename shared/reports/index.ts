@@ -7,6 +7,7 @@ export { buildRepairScope, zoneSeverities } from './scope';
 export { notInspectedItems, reportCover } from './records';
 export { buildConditionReport, conditionReportFromScope, headline } from './buyer';
 export { reportSummary } from './summary';
+export { repairPlanFromScope } from './plan';
 export {
   conditionSummary,
   conditionMetrics,

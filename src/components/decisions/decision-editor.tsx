@@ -1,8 +1,15 @@
-import { useMemo, useState, type ReactNode } from 'react';
+import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { BodyPlan, Zone } from '@/shared/body-plans';
 import type { DecisionResponse, FindingResponse, WorkshopSettings } from '@/shared/schemas';
-import { AppText, Button, ConfirmDialog, FormMessage, TextField } from '@/src/components/ui';
+import {
+  AppText,
+  Button,
+  ConfirmDialog,
+  FormMessage,
+  Section,
+  TextField,
+} from '@/src/components/ui';
 import { CrossSection } from '@/src/components/wood/cross-section';
 import { LengthBar } from '@/src/components/wood/length-bar';
 import { RecommendationCard } from '@/src/components/wood/recommendation-card';
@@ -62,7 +69,7 @@ export function DecisionEditor({
     .map(([, m]) => m);
 
   const measure = (
-    <Block title="Measurements">
+    <Section gap="md" title="Measurements">
       <Measurements
         values={values}
         onChange={form.change}
@@ -70,10 +77,10 @@ export function DecisionEditor({
         units={units}
         source={source}
       />
-    </Block>
+    </Section>
   );
   const section = model ? (
-    <Block title="What is left of the member">
+    <Section gap="md" title="What is left of the member">
       <CrossSection
         widthMm={model.inputs.widthMm}
         depthMm={model.inputs.depthMm}
@@ -87,7 +94,7 @@ export function DecisionEditor({
         spliceLimitRatio={settings.wood.verdictRules.spliceMaxAffectedLengthRatio}
         units={units}
       />
-    </Block>
+    </Section>
   ) : (
     <View style={styles.waiting} testID="decision-incomplete">
       <AppText muted>
@@ -97,7 +104,7 @@ export function DecisionEditor({
   );
   const recommend = model ? <RecommendationCard verdict={model.verdict} /> : null;
   const choice = model ? (
-    <Block title="Your decision">
+    <Section gap="md" title="Your decision">
       <OptionChoice
         recommended={model.verdict.option}
         value={model.option}
@@ -106,7 +113,7 @@ export function DecisionEditor({
         onReasonChange={(overrideReason) => form.change({ overrideReason })}
         errors={errors}
       />
-    </Block>
+    </Section>
   ) : null;
   const estimate = model ? (
     <EstimatePanel
@@ -218,22 +225,10 @@ export function DecisionEditor({
   );
 }
 
-function Block({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <View style={styles.block}>
-      <AppText variant="title" accessibilityRole="header">
-        {title}
-      </AppText>
-      {children}
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xl },
   columns: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xl },
   column: { flex: 1, minWidth: 0, gap: spacing.xl },
-  block: { gap: spacing.md },
   waiting: {
     padding: spacing.lg,
     borderRadius: radius.lg,

@@ -1,9 +1,8 @@
 import { Link } from 'expo-router';
-import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { REPORT_KIND_LABELS, type PublicShareResponse } from '@/shared/schemas/report';
 import { percent } from '@/shared/wood';
-import { AppText, Card } from '@/src/components/ui';
+import { AppText, Card, Section } from '@/src/components/ui';
 import { hours, money } from '@/src/components/wood/labels';
 import { colors, fonts, spacing } from '@/src/theme';
 import { DownloadLink } from './download-link';
@@ -51,11 +50,11 @@ export function PublicSummary({ share }: { share: PublicShareResponse }) {
         </AppText>
       </Card>
       {s.diagram ? (
-        <Section title="Where the damage is" testID="public-diagram-section">
+        <Section gap="xs" title="Where the damage is" testID="public-diagram-section">
           <ReportDiagram diagram={s.diagram} />
         </Section>
       ) : null}
-      <Section title="Must be fixed for the body to be safe" testID="public-must-fix">
+      <Section gap="xs" title="Must be fixed for the body to be safe" testID="public-must-fix">
         {s.mustFix.length === 0 ? (
           <AppText>
             No structural repair is listed in this report.
@@ -71,7 +70,7 @@ export function PublicSummary({ share }: { share: PublicShareResponse }) {
           ))
         )}
       </Section>
-      <Section title="Insect attack and its treatment" testID="public-infestations">
+      <Section gap="xs" title="Insect attack and its treatment" testID="public-infestations">
         {s.infestations.length === 0 ? (
           <AppText>No active or recent insect attack recorded.</AppText>
         ) : (
@@ -82,7 +81,7 @@ export function PublicSummary({ share }: { share: PublicShareResponse }) {
           ))
         )}
       </Section>
-      <Section title="Not inspected" testID="public-not-inspected">
+      <Section gap="xs" title="Not inspected" testID="public-not-inspected">
         {s.notInspected.length === 0 ? (
           <AppText>Every area of the body was looked at.</AppText>
         ) : (
@@ -98,7 +97,7 @@ export function PublicSummary({ share }: { share: PublicShareResponse }) {
         </AppText>
       </Section>
       {s.totals ? (
-        <Section title="Estimated repair" testID="public-totals">
+        <Section gap="xs" title="Estimated repair" testID="public-totals">
           <AppText>
             {hours(s.totals.hours)} of work, {money(s.totals.totalCost, s.totals.currency)} in all
           </AppText>
@@ -131,25 +130,6 @@ export function PublicSummary({ share }: { share: PublicShareResponse }) {
   );
 }
 
-function Section({
-  title,
-  children,
-  testID,
-}: {
-  title: string;
-  children: ReactNode;
-  testID?: string;
-}) {
-  return (
-    <View style={styles.section} testID={testID}>
-      <AppText variant="title" accessibilityRole="header">
-        {title}
-      </AppText>
-      {children}
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
   wrap: { gap: spacing.lg },
   titles: { gap: spacing.xs },
@@ -159,7 +139,6 @@ const styles = StyleSheet.create({
     borderLeftColor: colors.caution,
     backgroundColor: colors.cautionSoft,
   },
-  section: { gap: spacing.xs },
   download: { gap: spacing.xs },
   link: { color: colors.accent, textDecorationLine: 'underline', fontFamily: fonts.bold },
 });

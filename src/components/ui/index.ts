@@ -6,6 +6,7 @@ export { Checkbox, ChipToggle, SegmentedControl, Select, type Option } from './c
 export { ConfirmDialog } from './confirm-dialog';
 export { installFocusStyle } from './focus-style';
 export { Screen } from './screen';
+export { Section } from './section';
 export { EmptyState, ErrorView, LoadingView } from './states';
 export { EmailField, NUMERIC_INPUT, TextField } from './text-field';
 export { ToastProvider, useToast, type ToastKind, type ToastOptions } from './toast';

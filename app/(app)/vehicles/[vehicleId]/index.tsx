@@ -182,6 +182,13 @@ export default function VehicleOverview() {
             />
           ) : null}
           <Button
+            label="Repair plan"
+            variant="secondary"
+            compact
+            onPress={() => router.push(`/vehicles/${vehicleId}/plan`)}
+            testID="vehicle-plan"
+          />
+          <Button
             label="Reports"
             variant="secondary"
             compact
