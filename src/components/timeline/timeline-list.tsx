@@ -45,17 +45,25 @@ export function TimelineList({
 }) {
   if (!items.length) return <AppText muted>Nothing recorded of these kinds yet.</AppText>;
   const planned = items.filter((i) => i.planned).reverse();
+  const today = todayLocal();
   const recorded = items.filter((i) => !i.planned);
   return (
     <View style={styles.list} testID="timeline-list">
       {planned.length ? (
-        <Group title="Planned" testID="timeline-planned" items={planned} zoneLabel={zoneLabel} />
+        <Group
+          title="Planned"
+          testID="timeline-planned"
+          items={planned}
+          today={today}
+          zoneLabel={zoneLabel}
+        />
       ) : null}
       {recorded.length ? (
         <Group
           title={planned.length ? 'Recorded' : undefined}
           testID="timeline-recorded"
           items={recorded}
+          today={today}
           zoneLabel={zoneLabel}
         />
       ) : null}
@@ -66,11 +74,14 @@ export function TimelineList({
 function Group({
   title,
   items,
+  today,
   zoneLabel,
   testID,
 }: {
   title?: string;
   items: TimelineItem[];
+  /** The reader's today (YYYY-MM-DD), for how far off a planned entry is. */
+  today: string;
   zoneLabel(key: string): string;
   testID: string;
 }) {
@@ -90,9 +101,7 @@ function Group({
           <View style={styles.head}>
             <Badge label={TIMELINE_KIND_LABELS[item.kind]} tone={TONES[item.kind]} />
             <AppText variant="caption" muted>
-              {item.planned
-                ? timelineDistance(item.at.slice(0, 10), todayLocal())
-                : timelineWhen(item)}
+              {item.planned ? timelineDistance(item.at.slice(0, 10), today) : timelineWhen(item)}
             </AppText>
           </View>
           <AppText variant="label">{item.title}</AppText>

@@ -13,6 +13,7 @@ import {
 } from '@/src/components/ui';
 import { spacing } from '@/src/theme';
 import { ZoneMultiPicker } from './zone-multi-picker';
+import { todayLocal } from '@/src/format/dates';
 
 const PURPOSES: Record<SurveyPurpose, { label: string; description: string }> = {
   baseline: {
@@ -31,13 +32,6 @@ const PURPOSES: Record<SurveyPurpose, { label: string; description: string }> = 
 };
 export const PURPOSE_OPTIONS = SURVEY_PURPOSES.map((value) => ({ value, ...PURPOSES[value] }));
 
-/** Today in the device's calendar, as YYYY-MM-DD. */
-export function today(): string {
-  const d = new Date();
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
-}
-
 /** '' → null (not measured); a comma decimal is accepted; anything else stays NaN for the schema to refuse. */
 function toNumber(text: string): number | null {
   const t = text.trim().replace(',', '.');
@@ -54,7 +48,7 @@ type Props = {
 };
 
 export function SurveyForm({ zones, onSubmit, onCancel, errors, message, busy }: Props) {
-  const [date, setDate] = useState(today);
+  const [date, setDate] = useState(() => todayLocal());
   const [purpose, setPurpose] = useState<SurveyPurpose>('baseline');
   const [airTemp, setAirTemp] = useState('');
   const [humidity, setHumidity] = useState('');
